@@ -1,0 +1,2 @@
+/** JMH benchmarks of the hot paths. */
+package org.congener.bench;

@@ -1,0 +1,26 @@
+package org.congener.cli;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** Entry point of {@code ./congener}; each job is a subcommand in its own class. */
+@Command(name = "congener",
+        mixinStandardHelpOptions = true,
+        version = "congener 0.1.0",
+        description = "Streaming compound suggestions for research institutes.%n"
+                + "Suggestions are no safety review: read the safety data sheet before use.",
+        subcommands = {
+                CommandLine.HelpCommand.class,
+        })
+public final class CongenerMain {
+
+    public static void main(String[] args) {
+        System.exit(run(args));
+    }
+
+    /** Runs a command line and returns its exit code; tests call this instead of {@link #main}. */
+    public static int run(String... args) {
+        CommandLine commandLine = new CommandLine(new CongenerMain());
+        return commandLine.execute(args);
+    }
+}

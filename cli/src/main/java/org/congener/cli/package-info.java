@@ -1,0 +1,2 @@
+/** The one runnable, {@code congener}, and its subcommands. */
+package org.congener.cli;

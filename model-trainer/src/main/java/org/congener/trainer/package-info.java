@@ -1,0 +1,2 @@
+/** Reads interactions, trains and evaluates models, publishes model versions. */
+package org.congener.trainer;

@@ -1,0 +1,2 @@
+/** The recommender math, with no Kafka: ontology similarity, factorisation, fusion, metrics, splits. */
+package org.congener.core;

@@ -1,0 +1,11 @@
+package org.congener.schemas;
+
+/**
+ * A record Congener could not use, kept with why; key: the original record's key.
+ *
+ * @param payload         the original value as UTF-8 text, or base64 when it was not valid UTF-8
+ * @param payloadEncoding {@code utf-8} or {@code base64}
+ */
+public record DeadLetter(String schema, String sourceTopic, int partition, long offset, String reason,
+                         String payload, String payloadEncoding, String failedAt) {
+}
