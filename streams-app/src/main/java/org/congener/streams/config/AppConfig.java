@@ -1,0 +1,166 @@
+package org.congener.streams.config;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+
+import org.apache.kafka.common.config.AbstractConfig;
+import org.apache.kafka.common.config.ConfigDef;
+import org.apache.kafka.common.config.ConfigDef.Importance;
+import org.apache.kafka.common.config.ConfigDef.Range;
+import org.apache.kafka.common.config.ConfigDef.Type;
+import org.apache.kafka.common.config.ConfigDef.ValidString;
+import org.apache.kafka.streams.StreamsConfig;
+
+/**
+ * Every setting of the streams app, declared once with key, type, default, validator and doc
+ * ({@link #DEFINITION}); the configuration reference in {@code docs/runtime.md} is generated from it.
+ * Values are loaded by {@link ConfigLoader} (file, then environment, then flags).
+ */
+public final class AppConfig extends AbstractConfig {
+
+    public static final String BOOTSTRAP_SERVERS = "bootstrap.servers";
+    public static final String TOPIC_PREFIX = "topic.prefix";
+    public static final String APPLICATION_ID = "application.id";
+    public static final String STATE_DIR = "state.dir";
+    public static final String PROCESSING_GUARANTEE = "processing.guarantee";
+    public static final String STREAM_THREADS = "num.stream.threads";
+    public static final String COMMIT_INTERVAL_MS = "commit.interval.ms";
+    public static final String HTTP_HOST = "http.host";
+    public static final String HTTP_PORT = "http.port";
+    public static final String TOP_N = "suggestions.top.n";
+    public static final String TOPIC_PARTITIONS = "topic.partitions";
+    public static final String TOPIC_REPLICATION_FACTOR = "topic.replication.factor";
+
+    public static final String DEFAULT_BOOTSTRAP_SERVERS = "127.0.0.1:9092";
+    public static final String DEFAULT_APPLICATION_ID = "congener-streams";
+    public static final int DEFAULT_HTTP_PORT = 7070;
+    public static final int DEFAULT_TOP_N = 10;
+    public static final int DEFAULT_PARTITIONS = 4;
+
+    public static final ConfigDef DEFINITION = new ConfigDef()
+            .define(BOOTSTRAP_SERVERS, Type.LIST, DEFAULT_BOOTSTRAP_SERVERS, ConfigDef.ValidList.anyNonDuplicateValues(false, false),
+                    Importance.HIGH, "Kafka brokers to connect to, as host:port pairs separated by commas.")
+            .define(TOPIC_PREFIX, Type.STRING, "", new TopicPrefixValidator(), Importance.MEDIUM,
+                    "Prefix put before every topic name, so that several deployments can share one cluster"
+                            + " (letters, digits, '.', '_' and '-').")
+            .define(APPLICATION_ID, Type.STRING, DEFAULT_APPLICATION_ID, new ConfigDef.NonEmptyString(), Importance.HIGH,
+                    "Kafka Streams application id: names the consumer group, internal topics and state folder."
+                            + " Instances with the same id share the work.")
+            .define(STATE_DIR, Type.STRING, "congener-state", new ConfigDef.NonEmptyString(), Importance.MEDIUM,
+                    "Folder for the RocksDB state stores; relative paths start at the working directory.")
+            .define(PROCESSING_GUARANTEE, Type.STRING, StreamsConfig.EXACTLY_ONCE_V2,
+                    ValidString.in(StreamsConfig.EXACTLY_ONCE_V2, StreamsConfig.AT_LEAST_ONCE), Importance.HIGH,
+                    "exactly_once_v2 (needs at least 3 brokers in production, or a single-node broker whose"
+                            + " transaction log has replication 1) or at_least_once.")
+            .define(STREAM_THREADS, Type.INT, 1, Range.between(1, 64), Importance.MEDIUM,
+                    "Stream threads in this instance; more than the input partitions leaves threads idle.")
+            .define(COMMIT_INTERVAL_MS, Type.LONG, 100L, Range.between(1L, 600_000L), Importance.LOW,
+                    "How often processing progress is committed, in milliseconds; under exactly-once it is"
+                            + " also how long a suggestion may wait before readers see it.")
+            .define(HTTP_HOST, Type.STRING, "127.0.0.1", new ConfigDef.NonEmptyString(), Importance.MEDIUM,
+                    "Address the query API listens on. Keep 127.0.0.1 unless a proxy in front of it"
+                            + " handles access control.")
+            .define(HTTP_PORT, Type.INT, DEFAULT_HTTP_PORT, Range.between(0, 65535), Importance.MEDIUM,
+                    "Port of the query API; 0 picks a free port.")
+            .define(TOP_N, Type.INT, DEFAULT_TOP_N, Range.between(1, 100), Importance.MEDIUM,
+                    "Suggestions kept and published per researcher.")
+            .define(TOPIC_PARTITIONS, Type.INT, DEFAULT_PARTITIONS, Range.between(1, 1000), Importance.LOW,
+                    "Partitions of each topic when Congener creates its topics.")
+            .define(TOPIC_REPLICATION_FACTOR, Type.SHORT, (short) 1, Range.between(1, 7), Importance.LOW,
+                    "Replicas of each topic when Congener creates its topics; use 3 on a 3-broker cluster.");
+
+    AppConfig(Map<String, ?> values) {
+        super(DEFINITION, values, false);
+    }
+
+    /** All defaults; handy for tests and the embedded demo. */
+    public static AppConfig defaults() {
+        return new AppConfig(Map.of());
+    }
+
+    /** A copy with some settings replaced (values as they would appear in a file). */
+    public AppConfig with(Map<String, String> overrides) {
+        Map<String, Object> values = new java.util.HashMap<>(originals());
+        values.putAll(overrides);
+        return new AppConfig(values);
+    }
+
+    public List<String> bootstrapServers() {
+        return getList(BOOTSTRAP_SERVERS);
+    }
+
+    public String topicPrefix() {
+        return getString(TOPIC_PREFIX);
+    }
+
+    public String applicationId() {
+        return getString(APPLICATION_ID);
+    }
+
+    public Path stateDir() {
+        return Path.of(getString(STATE_DIR));
+    }
+
+    public String processingGuarantee() {
+        return getString(PROCESSING_GUARANTEE);
+    }
+
+    public int streamThreads() {
+        return getInt(STREAM_THREADS);
+    }
+
+    public long commitIntervalMs() {
+        return getLong(COMMIT_INTERVAL_MS);
+    }
+
+    public String httpHost() {
+        return getString(HTTP_HOST);
+    }
+
+    public int httpPort() {
+        return getInt(HTTP_PORT);
+    }
+
+    public int topN() {
+        return getInt(TOP_N);
+    }
+
+    public int topicPartitions() {
+        return getInt(TOPIC_PARTITIONS);
+    }
+
+    public short topicReplicationFactor() {
+        return getShort(TOPIC_REPLICATION_FACTOR);
+    }
+
+    /** Kafka Streams settings derived from these. */
+    public Map<String, Object> streamsProperties() {
+        Map<String, Object> p = new java.util.HashMap<>();
+        p.put(StreamsConfig.BOOTSTRAP_SERVERS_CONFIG, String.join(",", bootstrapServers()));
+        p.put(StreamsConfig.APPLICATION_ID_CONFIG, applicationId());
+        p.put(StreamsConfig.STATE_DIR_CONFIG, stateDir().toAbsolutePath().toString());
+        p.put(StreamsConfig.PROCESSING_GUARANTEE_CONFIG, processingGuarantee());
+        p.put(StreamsConfig.NUM_STREAM_THREADS_CONFIG, streamThreads());
+        p.put(StreamsConfig.COMMIT_INTERVAL_MS_CONFIG, commitIntervalMs());
+        p.put(StreamsConfig.APPLICATION_SERVER_CONFIG, httpHost() + ":" + Math.max(httpPort(), 1));
+        return p;
+    }
+
+    /** A topic prefix must keep topic names legal: Kafka allows [a-zA-Z0-9._-] only. */
+    static final class TopicPrefixValidator implements ConfigDef.Validator {
+        @Override
+        public void ensureValid(String name, Object value) {
+            String prefix = (String) value;
+            if (prefix != null && !prefix.matches("[a-zA-Z0-9._-]*")) {
+                throw new org.apache.kafka.common.config.ConfigException(name, value,
+                        "only letters, digits, '.', '_' and '-' are allowed in topic names");
+            }
+        }
+
+        @Override
+        public String toString() {
+            return "[a-zA-Z0-9._-]*";
+        }
+    }
+}
