@@ -10,4 +10,4 @@ COPY --from=build /src/congener /opt/congener/congener
 COPY --from=build /src/cli/target/classes /opt/congener/cli/target/classes
 COPY --from=build /src/cli/target/lib /opt/congener/cli/target/lib
 ENV CONGENER_JAVA_OPTS="-Xmx1g"
-ENTRYPOINT ["java", "--add-modules=jdk.incubator.vector", "-cp", "/opt/congener/cli/target/classes:/opt/congener/cli/target/lib/*", "org.congener.cli.CongenerMain"]
+ENTRYPOINT ["/opt/congener/congener"]

@@ -29,6 +29,7 @@ public final class AppConfig extends AbstractConfig {
     public static final String HTTP_HOST = "http.host";
     public static final String HTTP_PORT = "http.port";
     public static final String TOP_N = "suggestions.top.n";
+    public static final String POPULARITY_HALF_LIFE_HOURS = "popularity.half.life.hours";
     public static final String TOPIC_PARTITIONS = "topic.partitions";
     public static final String TOPIC_REPLICATION_FACTOR = "topic.replication.factor";
 
@@ -65,6 +66,9 @@ public final class AppConfig extends AbstractConfig {
                     "Port of the query API; 0 picks a free port.")
             .define(TOP_N, Type.INT, DEFAULT_TOP_N, Range.between(1, 100), Importance.MEDIUM,
                     "Suggestions kept and published per researcher.")
+            .define(POPULARITY_HALF_LIFE_HOURS, Type.DOUBLE, 720.0, Range.between(0.001, 1.0e6), Importance.LOW,
+                    "Half-life, in hours of event time, of an event's weight in the group-popularity baseline"
+                            + " (720 h = 30 days).")
             .define(TOPIC_PARTITIONS, Type.INT, DEFAULT_PARTITIONS, Range.between(1, 1000), Importance.LOW,
                     "Partitions of each topic when Congener creates its topics.")
             .define(TOPIC_REPLICATION_FACTOR, Type.SHORT, (short) 1, Range.between(1, 7), Importance.LOW,
@@ -124,6 +128,10 @@ public final class AppConfig extends AbstractConfig {
 
     public int topN() {
         return getInt(TOP_N);
+    }
+
+    public java.time.Duration popularityHalfLife() {
+        return java.time.Duration.ofMillis(Math.round(getDouble(POPULARITY_HALF_LIFE_HOURS) * 3_600_000.0));
     }
 
     public int topicPartitions() {

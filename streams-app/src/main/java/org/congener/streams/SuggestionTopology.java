@@ -1,0 +1,125 @@
+package org.congener.streams;
+
+import java.time.Duration;
+
+import org.apache.kafka.common.serialization.Serdes;
+import org.apache.kafka.common.utils.Bytes;
+import org.apache.kafka.streams.StreamsBuilder;
+import org.apache.kafka.streams.kstream.Consumed;
+import org.apache.kafka.streams.kstream.KStream;
+import org.apache.kafka.streams.kstream.Materialized;
+import org.apache.kafka.streams.kstream.Produced;
+import org.apache.kafka.streams.kstream.Repartitioned;
+import org.apache.kafka.streams.state.KeyValueStore;
+import org.apache.kafka.streams.state.Stores;
+import org.congener.schemas.CatalogEntry;
+import org.congener.schemas.DeadLetter;
+import org.congener.schemas.InventoryEvent;
+import org.congener.schemas.Researcher;
+import org.congener.schemas.Suggestions;
+import org.congener.schemas.TopicName;
+import org.congener.schemas.UsageEvent;
+import org.congener.streams.config.AppConfig;
+import org.congener.streams.processor.Intake;
+import org.congener.streams.processor.SuggestionProcessor;
+import org.congener.streams.processor.UsageEventIntake;
+import org.congener.streams.scoring.GroupPopularityScorer;
+import org.congener.streams.scoring.InteractionWeights;
+import org.congener.streams.scoring.SuggestionScorer;
+import org.congener.streams.serde.RecordSerdes;
+import org.congener.streams.state.GroupPopularitySerde;
+import org.congener.streams.state.InteractionProfileSerde;
+
+/**
+ * The suggestion topology.
+ *
+ * <pre>
+ * usage-events (raw bytes) ─▶ intake ─┬─ rejected ─▶ dead-letters
+ *                                      └─ accepted, re-keyed by group ─▶ repartition
+ *     ─▶ suggest [researcher-interactions, group-popularity] ─▶ suggestions ─▶ latest-suggestions (table)
+ * catalog, researchers, inventory-events ─▶ global tables read by intake and suggest
+ * </pre>
+ *
+ * Events are repartitioned by research group so that one task holds all of a group's members and the
+ * group's popularity. The latest list per researcher is a table over the {@code suggestions} topic,
+ * partitioned by researcher, which the query API reads.
+ */
+public final class SuggestionTopology {
+
+    public static final String INTERACTIONS_STORE = "researcher-interactions";
+    public static final String GROUP_POPULARITY_STORE = "group-popularity";
+    public static final String LATEST_SUGGESTIONS_STORE = "latest-suggestions";
+    public static final String CATALOG_STORE = "catalog-table";
+    public static final String RESEARCHERS_STORE = "researchers-table";
+    public static final String STOCK_STORE = "stock-table";
+    static final String BY_GROUP_REPARTITION = "usage-by-group";
+
+    /** What the topology needs besides the builder. */
+    public record Settings(String topicPrefix, int topN, Duration popularityHalfLife) {
+        public Settings {
+            if (topN < 1) {
+                throw new IllegalArgumentException("top-N must be at least 1, got " + topN);
+            }
+            if (popularityHalfLife.isNegative() || popularityHalfLife.isZero()) {
+                throw new IllegalArgumentException("popularity half-life must be positive");
+            }
+        }
+
+        public static Settings from(AppConfig config) {
+            return new Settings(config.topicPrefix(), config.topN(), config.popularityHalfLife());
+        }
+
+        String topic(TopicName name) {
+            return name.withPrefix(topicPrefix);
+        }
+    }
+
+    private SuggestionTopology() {
+    }
+
+    /** The topology with the baseline scorer (group popularity). */
+    public static void build(StreamsBuilder builder, Settings settings) {
+        build(builder, settings, new GroupPopularityScorer(settings.popularityHalfLife().toMillis()));
+    }
+
+    public static void build(StreamsBuilder builder, Settings settings, SuggestionScorer scorer) {
+        builder.globalTable(settings.topic(TopicName.CATALOG), Consumed.with(RecordSerdes.keys(), RecordSerdes.catalog()),
+                Materialized.<String, CatalogEntry, KeyValueStore<Bytes, byte[]>>as(CATALOG_STORE)
+                        .withKeySerde(RecordSerdes.keys()).withValueSerde(RecordSerdes.catalog()));
+        builder.globalTable(settings.topic(TopicName.RESEARCHERS), Consumed.with(RecordSerdes.keys(), RecordSerdes.researchers()),
+                Materialized.<String, Researcher, KeyValueStore<Bytes, byte[]>>as(RESEARCHERS_STORE)
+                        .withKeySerde(RecordSerdes.keys()).withValueSerde(RecordSerdes.researchers()));
+        // the latest stock event per compound; "in stock" means its quantity on hand is above zero
+        builder.globalTable(settings.topic(TopicName.INVENTORY_EVENTS), Consumed.with(RecordSerdes.keys(), RecordSerdes.inventoryEvents()),
+                Materialized.<String, InventoryEvent, KeyValueStore<Bytes, byte[]>>as(STOCK_STORE)
+                        .withKeySerde(RecordSerdes.keys()).withValueSerde(RecordSerdes.inventoryEvents()));
+
+        builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(INTERACTIONS_STORE),
+                Serdes.String(), new InteractionProfileSerde()));
+        builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(GROUP_POPULARITY_STORE),
+                Serdes.String(), new GroupPopularitySerde()));
+
+        KStream<String, Intake> intake = builder
+                .stream(settings.topic(TopicName.USAGE_EVENTS), Consumed.with(RecordSerdes.keys(), Serdes.ByteArray()))
+                .process(() -> new UsageEventIntake(RecordSerdes.usageEvents(), RESEARCHERS_STORE, CATALOG_STORE));
+
+        intake.filter((key, value) -> !value.isAccepted())
+                .mapValues(Intake::deadLetter)
+                .to(settings.topic(TopicName.DEAD_LETTERS), Produced.<String, DeadLetter>with(RecordSerdes.keys(), RecordSerdes.deadLetters()));
+
+        SuggestionProcessor.Stores stores = new SuggestionProcessor.Stores(INTERACTIONS_STORE, GROUP_POPULARITY_STORE,
+                RESEARCHERS_STORE, CATALOG_STORE, STOCK_STORE);
+        double halfLifeMs = settings.popularityHalfLife().toMillis();
+        intake.filter((key, value) -> value.isAccepted())
+                .mapValues(Intake::event)
+                .repartition(Repartitioned.<String, UsageEvent>with(RecordSerdes.keys(), RecordSerdes.usageEvents())
+                        .withName(BY_GROUP_REPARTITION))
+                .process(() -> new SuggestionProcessor(stores, scorer, InteractionWeights.defaults(), halfLifeMs,
+                        settings.topN()), INTERACTIONS_STORE, GROUP_POPULARITY_STORE)
+                .to(settings.topic(TopicName.SUGGESTIONS), Produced.<String, Suggestions>with(RecordSerdes.keys(), RecordSerdes.suggestions()));
+
+        builder.table(settings.topic(TopicName.SUGGESTIONS), Consumed.with(RecordSerdes.keys(), RecordSerdes.suggestions()),
+                Materialized.<String, Suggestions, KeyValueStore<Bytes, byte[]>>as(LATEST_SUGGESTIONS_STORE)
+                        .withKeySerde(RecordSerdes.keys()).withValueSerde(RecordSerdes.suggestions()));
+    }
+}

@@ -1,0 +1,119 @@
+package org.congener.streams.processor;
+
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.apache.kafka.streams.processor.api.Processor;
+import org.apache.kafka.streams.processor.api.ProcessorContext;
+import org.apache.kafka.streams.processor.api.Record;
+import org.apache.kafka.streams.state.KeyValueStore;
+import org.congener.schemas.CatalogEntry;
+import org.congener.schemas.InventoryEvent;
+import org.congener.schemas.Researcher;
+import org.congener.schemas.SchemaIds;
+import org.congener.schemas.Suggestion;
+import org.congener.schemas.Suggestions;
+import org.congener.schemas.UsageEvent;
+import org.congener.streams.SafetyCaution;
+import org.congener.streams.scoring.CandidateFilter;
+import org.congener.streams.scoring.InteractionWeights;
+import org.congener.streams.scoring.ScoredCandidate;
+import org.congener.streams.scoring.ScoringInput;
+import org.congener.streams.scoring.SuggestionScorer;
+import org.congener.streams.state.GroupPopularity;
+import org.congener.streams.state.InteractionProfile;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+
+/**
+ * For each accepted usage event (keyed by the researcher's group, so that a whole group's state is in
+ * one task): updates the researcher's interaction profile and the group's popularity, scores, and
+ * publishes the researcher's new top-N, keyed by researcher.
+ */
+public final class SuggestionProcessor implements Processor<String, UsageEvent, String, Suggestions> {
+
+    private static final Logger LOG = LoggerFactory.getLogger(SuggestionProcessor.class);
+
+    /** Store and table names the processor reads. */
+    public record Stores(String interactions, String groupPopularity, String researchers, String catalog,
+                         String stock) {
+    }
+
+    private final Stores stores;
+    private final SuggestionScorer scorer;
+    private final InteractionWeights weights;
+    private final double halfLifeMs;
+    private final int topN;
+    private ProcessorContext<String, Suggestions> context;
+    private KeyValueStore<String, InteractionProfile> interactions;
+    private KeyValueStore<String, GroupPopularity> groups;
+    private GlobalLookup<Researcher> researchers;
+    private GlobalLookup<CatalogEntry> catalog;
+    private GlobalLookup<InventoryEvent> stock;
+
+    public SuggestionProcessor(Stores stores, SuggestionScorer scorer, InteractionWeights weights,
+                               double halfLifeMs, int topN) {
+        this.stores = stores;
+        this.scorer = scorer;
+        this.weights = weights;
+        this.halfLifeMs = halfLifeMs;
+        this.topN = topN;
+    }
+
+    @Override
+    public void init(ProcessorContext<String, Suggestions> context) {
+        this.context = context;
+        this.interactions = context.getStateStore(stores.interactions());
+        this.groups = context.getStateStore(stores.groupPopularity());
+        this.researchers = GlobalLookup.of(context, stores.researchers());
+        this.catalog = GlobalLookup.of(context, stores.catalog());
+        this.stock = GlobalLookup.of(context, stores.stock());
+    }
+
+    @Override
+    public void process(Record<String, UsageEvent> record) {
+        UsageEvent event = record.value();
+        Researcher researcher = researchers.get(event.researcherId());
+        if (researcher == null) {
+            // accepted at intake, removed from the researchers table since: nothing to suggest to
+            LOG.warn("researcher {} of event {} left the researchers table; no suggestions published",
+                    event.researcherId(), event.eventId());
+            return;
+        }
+        long at = Instant.parse(event.occurredAt()).toEpochMilli();
+        float weight = weights.of(event.kind());
+
+        InteractionProfile profile = orNew(interactions.get(event.researcherId()), InteractionProfile::new);
+        profile.add(event.compoundId(), weight, at, InteractionWeights.isUse(event.kind()));
+        interactions.put(event.researcherId(), profile);
+
+        GroupPopularity group = orNew(groups.get(researcher.groupId()), GroupPopularity::new);
+        group.add(event.compoundId(), weight, at, halfLifeMs);
+        groups.put(researcher.groupId(), group);
+
+        CandidateFilter eligible = CandidateFilter.forResearcher(researcher, profile, catalog::get);
+        List<ScoredCandidate> ranked = scorer.rank(new ScoringInput(researcher, profile, group, at, eligible), topN);
+        Suggestions suggestions = new Suggestions(SchemaIds.SUGGESTIONS, researcher.researcherId(),
+                scorer.modelVersion(), scorer.source(), event.eventId(),
+                Instant.ofEpochMilli(context.currentSystemTimeMs()).toString(), items(ranked), SafetyCaution.TEXT);
+        context.forward(new Record<>(researcher.researcherId(), suggestions, record.timestamp()));
+    }
+
+    private List<Suggestion> items(List<ScoredCandidate> ranked) {
+        List<Suggestion> items = new ArrayList<>(ranked.size());
+        int rank = 1;
+        for (ScoredCandidate c : ranked) {
+            CatalogEntry entry = catalog.get(c.compoundId());
+            InventoryEvent lastStock = stock.get(c.compoundId());
+            boolean inStock = lastStock != null && lastStock.quantityOnHand() > 0;
+            items.add(new Suggestion(rank++, c.compoundId(), entry.name(), c.cfScore(), c.semanticScore(),
+                    c.fusedScore(), c.contributors(), null, null, entry.hazardCodes(), inStock));
+        }
+        return items;
+    }
+
+    private static <T> T orNew(T value, java.util.function.Supplier<T> fresh) {
+        return value != null ? value : fresh.get();
+    }
+}

@@ -1,0 +1,15 @@
+package org.congener.streams.scoring;
+
+import org.congener.schemas.Researcher;
+import org.congener.streams.state.GroupPopularity;
+import org.congener.streams.state.InteractionProfile;
+
+/**
+ * Everything a scorer may read for one researcher at one moment.
+ *
+ * @param atEpochMs time of the triggering event; recency is measured against it, so replays give the
+ *                  same lists as the live run
+ */
+public record ScoringInput(Researcher researcher, InteractionProfile profile, GroupPopularity group,
+                           long atEpochMs, CandidateFilter eligible) {
+}

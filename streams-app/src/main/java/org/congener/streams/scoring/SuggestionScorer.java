@@ -1,0 +1,25 @@
+package org.congener.streams.scoring;
+
+import java.util.List;
+
+import org.congener.schemas.SuggestionSource;
+
+/**
+ * Ranks candidate compounds for one researcher. Implementations only score: the caller has already
+ * updated the state with the triggering event, and {@link ScoringInput#eligible()} says which
+ * compounds may be offered at all (authorisation, active, not already used), so every scorer filters
+ * the same way.
+ */
+public interface SuggestionScorer {
+
+    /** What the lists of this scorer are, for {@code Suggestions.source}. */
+    SuggestionSource source();
+
+    /** The model version that scores, or null when no model is involved. */
+    default String modelVersion() {
+        return null;
+    }
+
+    /** At most {@code n} eligible candidates, best first. */
+    List<ScoredCandidate> rank(ScoringInput input, int n);
+}
