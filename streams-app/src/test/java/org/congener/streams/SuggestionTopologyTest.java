@@ -28,6 +28,7 @@ import org.congener.schemas.SuggestionSource;
 import org.congener.schemas.Suggestions;
 import org.congener.schemas.UsageEvent;
 import org.congener.schemas.UsageKind;
+import org.congener.streams.processor.DeadLetteringDeserializationHandler;
 import org.congener.streams.serde.RecordSerdes;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
@@ -54,6 +55,8 @@ class SuggestionTopologyTest {
         props.put(StreamsConfig.APPLICATION_ID_CONFIG, "topology-test");
         props.put(StreamsConfig.BOOTSTRAP_SERVERS_CONFIG, "unused:9092");
         props.put(StreamsConfig.STATE_DIR_CONFIG, stateDir.toString());
+        props.put(StreamsConfig.DESERIALIZATION_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringDeserializationHandler.class);
+        props.put(DeadLetteringDeserializationHandler.TOPIC_PREFIX_CONFIG, "lab.");
         driver = new TopologyTestDriver(builder.build(), props);
 
         TestInputTopic<String, CatalogEntry> catalog = driver.createInputTopic("lab.catalog",
@@ -213,6 +216,19 @@ class SuggestionTopologyTest {
         assertEquals(out.get(2), latest.get("ada"));
         assertEquals(out.get(0), latest.get("ben"));
         assertFalse(latest.get("ada").items().isEmpty());
+    }
+
+    @Test
+    void shouldKeepRunningWhenCatalogRecordIsCorrupt() {
+        TestInputTopic<String, String> rawCatalog = driver.createInputTopic("lab.catalog", new StringSerializer(),
+                new StringSerializer());
+        rawCatalog.pipeInput("c-broken", "{\"schema\": 42");
+        send("ben", "c-acetone", UsageKind.ORDER, "2026-01-02T10:00:00Z");
+        assertEquals("e1", suggestions.readValue().causedByEventId(), "the app carries on after a bad catalogue record");
+        // Kafka Streams' global thread writes no dead letters: the bad entry is logged and skipped,
+        // so an event on that compound is refused as unknown
+        usage.pipeInput("ben", Fixtures.json(Fixtures.event("e-b", "ben", "c-broken", UsageKind.ORDER, Fixtures.DAY0)));
+        assertEquals("unknown compound 'c-broken'", deadLetters.readValue().reason());
     }
 
     private double deadLetterCount() {

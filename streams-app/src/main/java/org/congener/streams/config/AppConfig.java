@@ -11,6 +11,7 @@ import org.apache.kafka.common.config.ConfigDef.Range;
 import org.apache.kafka.common.config.ConfigDef.Type;
 import org.apache.kafka.common.config.ConfigDef.ValidString;
 import org.apache.kafka.streams.StreamsConfig;
+import org.congener.streams.processor.DeadLetteringDeserializationHandler;
 
 /**
  * Every setting of the streams app, declared once with key, type, default, validator and doc
@@ -151,7 +152,8 @@ public final class AppConfig extends AbstractConfig {
         p.put(StreamsConfig.PROCESSING_GUARANTEE_CONFIG, processingGuarantee());
         p.put(StreamsConfig.NUM_STREAM_THREADS_CONFIG, streamThreads());
         p.put(StreamsConfig.COMMIT_INTERVAL_MS_CONFIG, commitIntervalMs());
-        p.put(StreamsConfig.APPLICATION_SERVER_CONFIG, httpHost() + ":" + Math.max(httpPort(), 1));
+        p.put(StreamsConfig.DESERIALIZATION_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringDeserializationHandler.class);
+        p.put(DeadLetteringDeserializationHandler.TOPIC_PREFIX_CONFIG, topicPrefix());
         return p;
     }
 

@@ -1,0 +1,113 @@
+package org.congener.streams;
+
+import java.time.Duration;
+import java.util.Map;
+import java.util.Properties;
+
+import org.apache.kafka.common.Metric;
+import org.apache.kafka.common.MetricName;
+import org.apache.kafka.streams.KafkaStreams;
+import org.apache.kafka.streams.StreamsBuilder;
+import org.apache.kafka.streams.Topology;
+import org.apache.kafka.streams.errors.StreamsUncaughtExceptionHandler;
+import org.congener.streams.api.QueryServer;
+import org.congener.streams.api.StoreSuggestionQueries;
+import org.congener.streams.config.AppConfig;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+
+/**
+ * The running streams app: the suggestion topology in Kafka Streams plus the query API. Only wiring;
+ * the topology is {@link SuggestionTopology#build}.
+ */
+public final class StreamsApp implements AutoCloseable {
+
+    private static final Logger LOG = LoggerFactory.getLogger(StreamsApp.class);
+    private static final Duration CLOSE_TIMEOUT = Duration.ofSeconds(30);
+
+    private final KafkaStreams streams;
+    private final QueryServer server;
+
+    private StreamsApp(KafkaStreams streams, QueryServer server) {
+        this.streams = streams;
+        this.server = server;
+    }
+
+    /** Starts Kafka Streams and the query API; returns without waiting for RUNNING. */
+    public static StreamsApp start(AppConfig config) {
+        StreamsBuilder builder = new StreamsBuilder();
+        SuggestionTopology.build(builder, SuggestionTopology.Settings.from(config));
+        Topology topology = builder.build();
+        Properties props = new Properties();
+        props.putAll(config.streamsProperties());
+        KafkaStreams streams = new KafkaStreams(topology, props);
+        streams.setUncaughtExceptionHandler(exception -> {
+            LOG.error("stream thread failed; replacing it", exception);
+            return StreamsUncaughtExceptionHandler.StreamThreadExceptionResponse.REPLACE_THREAD;
+        });
+        // open the port first: a taken port should fail before Kafka Streams starts anything
+        StoreSuggestionQueries queries = new StoreSuggestionQueries(streams, config.topN(), () -> deadLetters(streams));
+        QueryServer server = QueryServer.start(config.httpHost(), config.httpPort(), queries);
+        try {
+            streams.start();
+        } catch (RuntimeException e) {
+            server.close();
+            streams.close(CLOSE_TIMEOUT);
+            throw e;
+        }
+        return new StreamsApp(streams, server);
+    }
+
+    /** Waits until Kafka Streams is RUNNING; false when the timeout passed first or it failed. */
+    public boolean awaitRunning(Duration timeout) throws InterruptedException {
+        long deadline = System.nanoTime() + timeout.toNanos();
+        while (System.nanoTime() < deadline) {
+            KafkaStreams.State state = streams.state();
+            if (state == KafkaStreams.State.RUNNING) {
+                return true;
+            }
+            if (state == KafkaStreams.State.ERROR || state == KafkaStreams.State.NOT_RUNNING
+                    || state == KafkaStreams.State.PENDING_ERROR) {
+                return false;
+            }
+            Thread.sleep(50);
+        }
+        return false;
+    }
+
+    public KafkaStreams kafkaStreams() {
+        return streams;
+    }
+
+    /** {@code http://host:port} of the query API. */
+    public String baseUrl() {
+        return server.baseUrl();
+    }
+
+    public int httpPort() {
+        return server.port();
+    }
+
+    /** Usage events sent to the dead letters by this instance since it started. */
+    public long deadLetterCount() {
+        return deadLetters(streams);
+    }
+
+    static long deadLetters(KafkaStreams streams) {
+        double total = 0;
+        for (Map.Entry<MetricName, ? extends Metric> entry : streams.metrics().entrySet()) {
+            MetricName name = entry.getKey();
+            if (name.group().equals("congener") && name.name().equals("dead-letters-total")) {
+                total += ((Number) entry.getValue().metricValue()).doubleValue();
+            }
+        }
+        return Math.round(total);
+    }
+
+    /** Stops the query API, then Kafka Streams (committing its work). */
+    @Override
+    public void close() {
+        server.close();
+        streams.close(CLOSE_TIMEOUT);
+    }
+}

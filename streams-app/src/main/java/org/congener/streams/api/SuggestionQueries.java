@@ -1,0 +1,36 @@
+package org.congener.streams.api;
+
+import java.util.Optional;
+
+import org.congener.schemas.Suggestions;
+
+/** What the query API reads; backed by the streams app's stores, or by a fake in tests. */
+public interface SuggestionQueries {
+
+    /** The latest list of the researcher, empty when none was published yet. */
+    Optional<Suggestions> latest(String researcherId);
+
+    /** Whether the researcher is in the researchers table. */
+    boolean isKnownResearcher(String researcherId);
+
+    /** The app's state for {@code /health}. */
+    Health health();
+
+    /** Most suggestions one list holds (the top-N setting). */
+    int maxItems();
+
+    /**
+     * @param status      Kafka Streams state, e.g. RUNNING
+     * @param serving     whether queries can be answered now
+     * @param deadLetters usage events sent to the dead letters since start
+     */
+    record Health(String status, boolean serving, long deadLetters) {
+    }
+
+    /** The stores are not queryable now (starting, rebalancing); the API answers 503. */
+    final class NotReadyException extends RuntimeException {
+        public NotReadyException(String message) {
+            super(message);
+        }
+    }
+}

@@ -1,0 +1,50 @@
+package org.congener.streams.processor;
+
+import java.time.Instant;
+import java.util.List;
+import java.util.Map;
+
+import org.apache.kafka.clients.consumer.ConsumerRecord;
+import org.apache.kafka.clients.producer.ProducerRecord;
+import org.apache.kafka.streams.errors.DeserializationExceptionHandler;
+import org.apache.kafka.streams.errors.ErrorHandlerContext;
+import org.congener.schemas.DeadLetter;
+import org.congener.schemas.TopicName;
+import org.congener.streams.serde.RecordSerdes;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+
+/**
+ * For a value Kafka Streams itself cannot deserialize (catalogue, researchers, stock, or the
+ * suggestions table): logs topic, partition and offset, hands Kafka Streams a dead letter in
+ * Congener's format to write to {@code dead-letters}, and carries on. Kafka Streams writes such
+ * records only from stream threads: for the global tables (catalogue, researchers, stock) the log
+ * line is all that remains. Usage events never get here: they are read as raw bytes by
+ * {@link UsageEventIntake}.
+ */
+public final class DeadLetteringDeserializationHandler implements DeserializationExceptionHandler {
+
+    /** Streams setting naming the topic prefix, so that the handler finds the dead-letter topic. */
+    public static final String TOPIC_PREFIX_CONFIG = "congener.topic.prefix";
+
+    private static final Logger LOG = LoggerFactory.getLogger(DeadLetteringDeserializationHandler.class);
+
+    private String deadLetterTopic = TopicName.DEAD_LETTERS.baseName();
+
+    @Override
+    public void configure(Map<String, ?> configs) {
+        Object prefix = configs.get(TOPIC_PREFIX_CONFIG);
+        deadLetterTopic = TopicName.DEAD_LETTERS.withPrefix(prefix == null ? "" : prefix.toString());
+    }
+
+    @Override
+    public Response handleError(ErrorHandlerContext context, ConsumerRecord<byte[], byte[]> record, Exception exception) {
+        String reason = exception.getMessage() == null ? exception.getClass().getSimpleName() : exception.getMessage();
+        LOG.warn("dead letter from {} partition {} offset {}: {}", record.topic(), record.partition(), record.offset(),
+                reason);
+        DeadLetter letter = DeadLetterFactory.of(record.topic(), record.partition(), record.offset(), reason,
+                record.value(), Instant.now());
+        byte[] value = RecordSerdes.deadLetters().serializer().serialize(deadLetterTopic, letter);
+        return Response.resume(List.of(new ProducerRecord<>(deadLetterTopic, record.key(), value)));
+    }
+}

@@ -1,0 +1,189 @@
+package org.congener.streams;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.net.URI;
+import java.net.http.HttpClient;
+import java.net.http.HttpRequest;
+import java.net.http.HttpResponse;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Properties;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import org.apache.kafka.clients.admin.Admin;
+import org.apache.kafka.clients.admin.AdminClientConfig;
+import org.apache.kafka.clients.consumer.ConsumerConfig;
+import org.apache.kafka.clients.consumer.ConsumerRecord;
+import org.apache.kafka.clients.consumer.KafkaConsumer;
+import org.apache.kafka.clients.producer.KafkaProducer;
+import org.apache.kafka.clients.producer.ProducerConfig;
+import org.apache.kafka.clients.producer.ProducerRecord;
+import org.apache.kafka.common.TopicPartition;
+import org.apache.kafka.common.serialization.Deserializer;
+import org.apache.kafka.common.serialization.StringDeserializer;
+import org.apache.kafka.common.serialization.StringSerializer;
+import org.congener.broker.SharedBroker;
+import org.congener.broker.TopicAdmin;
+import org.congener.schemas.DeadLetter;
+import org.congener.schemas.Suggestions;
+import org.congener.schemas.TopicName;
+import org.congener.schemas.UsageEvent;
+import org.congener.schemas.UsageKind;
+import org.congener.streams.config.AppConfig;
+import org.congener.streams.serde.RecordSerdes;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The real topology on the shared embedded broker, with RocksDB state and the HTTP query API. */
+@ExtendWith(SharedBroker.class)
+class StreamsAppIntegrationTest {
+
+    private static final Duration WAIT = Duration.ofSeconds(60);
+    private final HttpClient http = HttpClient.newHttpClient();
+    private final ObjectMapper json = new ObjectMapper();
+
+    @TempDir
+    Path stateDir;
+
+    @Test
+    void shouldPublishSuggestionsDeadLettersAndServeThemWhenEventsFlowThroughBroker() throws Exception {
+        String prefix = SharedBroker.uniquePrefix("streams-app");
+        String bootstrap = SharedBroker.bootstrapServers();
+        TopicAdmin.createAll(bootstrap, prefix, 2, (short) 1);
+        try (KafkaProducer<String, String> producer = producer(bootstrap)) {
+            for (var entry : Fixtures.catalog()) {
+                producer.send(new ProducerRecord<>(prefix + "catalog", entry.compoundId(),
+                        text(RecordSerdes.catalog().serializer().serialize("", entry))));
+            }
+            for (var researcher : Fixtures.researchers()) {
+                producer.send(new ProducerRecord<>(prefix + "researchers", researcher.researcherId(),
+                        text(RecordSerdes.researchers().serializer().serialize("", researcher))));
+            }
+            producer.flush();
+        }
+
+        AppConfig config = AppConfig.defaults().with(Map.of(
+                AppConfig.BOOTSTRAP_SERVERS, bootstrap,
+                AppConfig.TOPIC_PREFIX, prefix,
+                AppConfig.APPLICATION_ID, SharedBroker.uniqueApplicationId("streams-app"),
+                AppConfig.STATE_DIR, stateDir.toString(),
+                AppConfig.HTTP_PORT, "0",
+                AppConfig.TOP_N, "3"));
+        try (StreamsApp app = StreamsApp.start(config)) {
+            assertTrue(app.awaitRunning(WAIT), "streams app reached RUNNING");
+
+            List<UsageEvent> good = List.of(
+                    Fixtures.event("g1", "ben", "c-acetone", UsageKind.ORDER, "2026-01-02T10:00:00Z"),
+                    Fixtures.event("g2", "ben", "c-toluene", UsageKind.ORDER, "2026-01-02T11:00:00Z"),
+                    Fixtures.event("g3", "ada", "c-ethanol", UsageKind.ORDER, "2026-01-03T10:00:00Z"),
+                    Fixtures.event("g4", "dee", "c-ethanol", UsageKind.VIEW, "2026-01-03T11:00:00Z"));
+            try (KafkaProducer<String, String> producer = producer(bootstrap)) {
+                String topic = TopicName.USAGE_EVENTS.withPrefix(prefix);
+                producer.send(new ProducerRecord<>(topic, "ben", Fixtures.json(good.get(0))));
+                producer.send(new ProducerRecord<>(topic, "ben", Fixtures.json(good.get(1))));
+                producer.send(new ProducerRecord<>(topic, "ada", "this is not JSON"));
+                producer.send(new ProducerRecord<>(topic, "ada", Fixtures.json(good.get(2))));
+                producer.send(new ProducerRecord<>(topic, "dee", Fixtures.json(good.get(3))));
+                producer.flush();
+            }
+
+            List<Suggestions> out = readAll(bootstrap, TopicName.SUGGESTIONS.withPrefix(prefix),
+                    RecordSerdes.suggestions().deserializer(), 4);
+            assertEquals(List.of("g1", "g2", "g3", "g4"),
+                    out.stream().map(Suggestions::causedByEventId).sorted().toList());
+            Suggestions forAda = out.stream().filter(s -> s.researcherId().equals("ada")).findFirst().orElseThrow();
+            assertEquals(List.of("c-acetone", "c-toluene"),
+                    forAda.items().stream().map(i -> i.compoundId()).sorted().toList());
+
+            List<DeadLetter> letters = readAll(bootstrap, TopicName.DEAD_LETTERS.withPrefix(prefix),
+                    RecordSerdes.deadLetters().deserializer(), 1);
+            assertEquals(1, letters.size());
+            assertEquals("this is not JSON", letters.get(0).payload());
+            assertEquals(TopicName.USAGE_EVENTS.withPrefix(prefix), letters.get(0).sourceTopic());
+            assertTrue(letters.get(0).offset() >= 0);
+
+            JsonNode body = awaitOk(app.baseUrl() + "/researchers/ada/suggestions?n=1");
+            assertEquals("ada", body.get("researcherId").asText());
+            assertEquals(1, body.get("items").size());
+            assertEquals(SafetyCaution.TEXT, body.get("caution").asText());
+
+            HttpResponse<String> unknown = get(app.baseUrl() + "/researchers/zed/suggestions");
+            assertEquals(404, unknown.statusCode());
+            assertTrue(unknown.body().contains("unknown researcher 'zed'"));
+            assertTrue(unknown.body().contains("safety data sheet"));
+
+            HttpResponse<String> bad = get(app.baseUrl() + "/researchers/ada/suggestions?n=lots");
+            assertEquals(400, bad.statusCode());
+            assertTrue(bad.body().contains("n must be a whole number from 1 to 3"));
+            assertTrue(bad.body().contains("safety data sheet"));
+
+            HttpResponse<String> health = get(app.baseUrl() + "/health");
+            assertEquals(200, health.statusCode());
+            JsonNode healthBody = json.readTree(health.body());
+            assertEquals("RUNNING", healthBody.get("status").asText());
+            assertEquals(1, healthBody.get("deadLetters").asLong());
+            assertEquals(1, app.deadLetterCount());
+        }
+    }
+
+    private JsonNode awaitOk(String url) throws Exception {
+        long deadline = System.nanoTime() + WAIT.toNanos();
+        HttpResponse<String> response = get(url);
+        while (response.statusCode() != 200 && System.nanoTime() < deadline) {
+            Thread.sleep(100);
+            response = get(url);
+        }
+        assertEquals(200, response.statusCode(), response.body());
+        return json.readTree(response.body());
+    }
+
+    private HttpResponse<String> get(String url) throws Exception {
+        return http.send(HttpRequest.newBuilder(URI.create(url)).GET().build(), HttpResponse.BodyHandlers.ofString());
+    }
+
+    private static KafkaProducer<String, String> producer(String bootstrap) {
+        Properties p = new Properties();
+        p.put(ProducerConfig.BOOTSTRAP_SERVERS_CONFIG, bootstrap);
+        return new KafkaProducer<>(p, new StringSerializer(), new StringSerializer());
+    }
+
+    private static String text(byte[] bytes) {
+        return new String(bytes, java.nio.charset.StandardCharsets.UTF_8);
+    }
+
+    /** Reads every partition from the start with assign() (no consumer group) until {@code expected} values came. */
+    static <V> List<V> readAll(String bootstrap, String topic, Deserializer<V> values, int expected) throws Exception {
+        Properties p = new Properties();
+        p.put(ConsumerConfig.BOOTSTRAP_SERVERS_CONFIG, bootstrap);
+        p.put(ConsumerConfig.ISOLATION_LEVEL_CONFIG, "read_committed");
+        List<V> out = new ArrayList<>();
+        try (Admin admin = Admin.create(Map.of(AdminClientConfig.BOOTSTRAP_SERVERS_CONFIG, bootstrap));
+             KafkaConsumer<String, V> consumer = new KafkaConsumer<>(p, new StringDeserializer(), values)) {
+            int partitions = admin.describeTopics(List.of(topic)).allTopicNames().get().get(topic).partitions().size();
+            List<TopicPartition> assigned = new ArrayList<>();
+            for (int i = 0; i < partitions; i++) {
+                assigned.add(new TopicPartition(topic, i));
+            }
+            consumer.assign(assigned);
+            consumer.seekToBeginning(assigned);
+            long deadline = System.nanoTime() + WAIT.toNanos();
+            while (out.size() < expected && System.nanoTime() < deadline) {
+                for (ConsumerRecord<String, V> record : consumer.poll(Duration.ofMillis(200))) {
+                    out.add(record.value());
+                }
+            }
+            // a little longer, so that an unexpected extra record would show
+            for (ConsumerRecord<String, V> record : consumer.poll(Duration.ofMillis(500))) {
+                out.add(record.value());
+            }
+        }
+        return out;
+    }
+}
