@@ -11,6 +11,7 @@ import picocli.CommandLine.Command;
                 + "Suggestions are no safety review: read the safety data sheet before use.",
         subcommands = {
                 CommandLine.HelpCommand.class,
+                StreamsCommand.class,
         })
 public final class CongenerMain {
 
@@ -21,6 +22,8 @@ public final class CongenerMain {
     /** Runs a command line and returns its exit code; tests call this instead of {@link #main}. */
     public static int run(String... args) {
         CommandLine commandLine = new CommandLine(new CongenerMain());
+        commandLine.setParameterExceptionHandler(CliErrors::badCommandLine);
+        commandLine.setExecutionExceptionHandler(CliErrors::failed);
         return commandLine.execute(args);
     }
 }
