@@ -85,14 +85,17 @@ public final class SuggestionTopology {
     public static void build(StreamsBuilder builder, Settings settings, SuggestionScorer scorer) {
         builder.globalTable(settings.topic(TopicName.CATALOG), Consumed.with(RecordSerdes.keys(), RecordSerdes.catalog()),
                 Materialized.<String, CatalogEntry, KeyValueStore<Bytes, byte[]>>as(CATALOG_STORE)
-                        .withKeySerde(RecordSerdes.keys()).withValueSerde(RecordSerdes.catalog()));
+                        .withKeySerde(RecordSerdes.keys())
+                        .withValueSerde(RecordSerdes.storeValue(TopicName.CATALOG, CatalogEntry.class)));
         builder.globalTable(settings.topic(TopicName.RESEARCHERS), Consumed.with(RecordSerdes.keys(), RecordSerdes.researchers()),
                 Materialized.<String, Researcher, KeyValueStore<Bytes, byte[]>>as(RESEARCHERS_STORE)
-                        .withKeySerde(RecordSerdes.keys()).withValueSerde(RecordSerdes.researchers()));
+                        .withKeySerde(RecordSerdes.keys())
+                        .withValueSerde(RecordSerdes.storeValue(TopicName.RESEARCHERS, Researcher.class)));
         // the latest stock event per compound; "in stock" means its quantity on hand is above zero
         builder.globalTable(settings.topic(TopicName.INVENTORY_EVENTS), Consumed.with(RecordSerdes.keys(), RecordSerdes.inventoryEvents()),
                 Materialized.<String, InventoryEvent, KeyValueStore<Bytes, byte[]>>as(STOCK_STORE)
-                        .withKeySerde(RecordSerdes.keys()).withValueSerde(RecordSerdes.inventoryEvents()));
+                        .withKeySerde(RecordSerdes.keys())
+                        .withValueSerde(RecordSerdes.storeValue(TopicName.INVENTORY_EVENTS, InventoryEvent.class)));
 
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(INTERACTIONS_STORE),
                 Serdes.String(), new InteractionProfileSerde()));
@@ -120,6 +123,7 @@ public final class SuggestionTopology {
 
         builder.table(settings.topic(TopicName.SUGGESTIONS), Consumed.with(RecordSerdes.keys(), RecordSerdes.suggestions()),
                 Materialized.<String, Suggestions, KeyValueStore<Bytes, byte[]>>as(LATEST_SUGGESTIONS_STORE)
-                        .withKeySerde(RecordSerdes.keys()).withValueSerde(RecordSerdes.suggestions()));
+                        .withKeySerde(RecordSerdes.keys())
+                        .withValueSerde(RecordSerdes.storeValue(TopicName.SUGGESTIONS, Suggestions.class)));
     }
 }

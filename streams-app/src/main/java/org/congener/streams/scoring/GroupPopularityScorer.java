@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
-import java.util.PriorityQueue;
 
 import org.congener.schemas.SuggestionSource;
 import org.congener.streams.state.GroupPopularity;
@@ -36,20 +35,23 @@ public final class GroupPopularityScorer implements SuggestionScorer {
 
     @Override
     public List<ScoredCandidate> rank(ScoringInput input, int n) {
-        PriorityQueue<ScoredCandidate> worstFirst = new PriorityQueue<>(BEST_FIRST.reversed());
+        // score everything first (cheap), then check eligibility best-first and stop at n: the check
+        // reads the catalogue, which costs far more than the arithmetic
+        List<ScoredCandidate> all = new ArrayList<>(input.group().size());
         for (Map.Entry<String, GroupPopularity.Score> entry : input.group().scores().entrySet()) {
-            String compoundId = entry.getKey();
-            if (!input.eligible().eligible(compoundId)) {
-                continue;
+            double popularity = input.group().at(entry.getKey(), input.atEpochMs(), halfLifeMs);
+            all.add(new ScoredCandidate(entry.getKey(), 0, 0, popularity, List.of()));
+        }
+        all.sort(BEST_FIRST);
+        List<ScoredCandidate> ranked = new ArrayList<>(Math.min(n, all.size()));
+        for (ScoredCandidate candidate : all) {
+            if (ranked.size() == n) {
+                break;
             }
-            double popularity = input.group().at(compoundId, input.atEpochMs(), halfLifeMs);
-            worstFirst.add(new ScoredCandidate(compoundId, 0, 0, popularity, List.of()));
-            if (worstFirst.size() > n) {
-                worstFirst.poll();
+            if (input.eligible().eligible(candidate.compoundId())) {
+                ranked.add(candidate);
             }
         }
-        List<ScoredCandidate> ranked = new ArrayList<>(worstFirst);
-        ranked.sort(BEST_FIRST);
         return ranked;
     }
 }

@@ -28,14 +28,24 @@ public final class InterimJsonSerde<T> implements Serde<T> {
 
     private final Class<T> type;
     private final String schemaId;
+    private final RecordComponent[] components;
+    private final boolean checked;
 
-    private InterimJsonSerde(Class<T> type, String schemaId) {
+    private InterimJsonSerde(Class<T> type, String schemaId, boolean checked) {
         this.type = type;
         this.schemaId = schemaId;
+        this.components = type.getRecordComponents();
+        this.checked = checked;
     }
 
+    /** Reads and checks values of {@code topic}. */
     public static <T> InterimJsonSerde<T> of(TopicName topic, Class<T> type) {
-        return new InterimJsonSerde<>(type, schemaIdOf(topic));
+        return new InterimJsonSerde<>(type, schemaIdOf(topic), true);
+    }
+
+    /** Reads without checks: for state stores, whose values were checked when they came off the topic. */
+    public static <T> InterimJsonSerde<T> unchecked(TopicName topic, Class<T> type) {
+        return new InterimJsonSerde<>(type, schemaIdOf(topic), false);
     }
 
     static String schemaIdOf(TopicName topic) {
@@ -84,12 +94,14 @@ public final class InterimJsonSerde<T> implements Serde<T> {
         if (value == null) {
             throw new RecordRejectedException("not a valid " + type.getSimpleName() + ": JSON null");
         }
-        checkComplete(value);
+        if (checked) {
+            checkComplete(value);
+        }
         return value;
     }
 
     private void checkComplete(T value) {
-        for (RecordComponent component : type.getRecordComponents()) {
+        for (RecordComponent component : components) {
             Object field;
             try {
                 field = component.getAccessor().invoke(value);

@@ -33,6 +33,19 @@ public final class RecordSerdes {
         return InterimJsonSerde.of(topic, type);
     }
 
+    /**
+     * Serde of a state store holding values of {@code topic}: same bytes as the topic (global tables
+     * restore by copying them), read without validation, since every value was checked on arrival and a
+     * store is read far more often than written.
+     */
+    public static <T> Serde<T> storeValue(TopicName topic, Class<T> type) {
+        if (!topic.valueType().equals(type)) {
+            throw new IllegalArgumentException(topic + " carries " + topic.valueType().getSimpleName()
+                    + ", not " + type.getSimpleName());
+        }
+        return InterimJsonSerde.unchecked(topic, type);
+    }
+
     public static Serde<UsageEvent> usageEvents() {
         return value(TopicName.USAGE_EVENTS, UsageEvent.class);
     }
