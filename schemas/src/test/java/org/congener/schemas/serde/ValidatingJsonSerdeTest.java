@@ -80,6 +80,7 @@ class ValidatingJsonSerdeTest {
         InvalidRecordException empty = assertThrows(InvalidRecordException.class,
                 () -> usage.deserializer().deserialize(TOPIC, new byte[0]));
         assertEquals("usage-events: unreadable value: empty value (0 bytes)", empty.reason());
+        assertEquals("usage-events: unreadable value: no JSON value in 3 bytes", readFails(" \n ").reason());
         String twice = new String(Examples.typical(TopicName.USAGE_EVENTS), StandardCharsets.UTF_8).strip();
         InvalidRecordException trailing = readFails(twice + twice);
         assertTrue(trailing.parseError().startsWith("not valid JSON: Trailing token"), trailing.parseError());
