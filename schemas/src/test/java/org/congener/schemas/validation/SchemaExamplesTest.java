@@ -66,6 +66,25 @@ class SchemaExamplesTest {
         return tests;
     }
 
+    @TestFactory
+    List<DynamicTest> shouldCoverEveryKindOfMistakeForEveryValue() {
+        List<DynamicTest> tests = new ArrayList<>();
+        for (TopicName topic : TopicName.values()) {
+            tests.add(dynamicTest(topic.baseName() + " has missing, mistyped, out-of-range, malformed, "
+                    + "wrong-version and unknown-property examples", () -> {
+                Set<String> rules = new TreeSet<>();
+                Examples.read(Examples.folderOf(topic).resolve("expected-violations.json"))
+                        .forEach(list -> list.forEach(v -> rules.add(v.get("rule").asText())));
+                assertTrue(rules.containsAll(Set.of("required", "type", "pattern", "const", "additionalProperties")),
+                        rules::toString);
+                assertTrue(rules.stream().anyMatch(OUT_OF_RANGE::contains), rules::toString);
+            }));
+        }
+        return tests;
+    }
+
+    private static final Set<String> OUT_OF_RANGE = Set.of("minimum", "maximum", "minItems", "minLength", "enum");
+
     private static Set<String> fieldsAndRules(JsonNode expected) {
         Set<String> pairs = new HashSet<>();
         if (expected != null) {
