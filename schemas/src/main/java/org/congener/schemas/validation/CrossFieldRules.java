@@ -19,13 +19,52 @@ final class CrossFieldRules {
 
     static List<CrossFieldRule> forTopic(TopicName topic) {
         return switch (topic) {
-            case MODEL_MANIFESTS -> List.of(CrossFieldRules::gramIsRankSquared);
-            case ITEM_NEIGHBOURS -> List.of(CrossFieldRules::neighboursMostSimilarFirst,
-                    CrossFieldRules::neighboursAreOtherDistinctCompounds);
-            case SUGGESTIONS -> List.of(CrossFieldRules::ranksRunFromOne);
-            case DRIFT_METRICS -> List.of(CrossFieldRules::windowEndsAfterItStarts);
-            default -> List.of();
+            case MODEL_MANIFESTS -> List.of(CrossFieldRules::numbersAreFinite, CrossFieldRules::gramIsRankSquared);
+            case ITEM_NEIGHBOURS -> List.of(CrossFieldRules::numbersAreFinite,
+                    CrossFieldRules::neighboursMostSimilarFirst, CrossFieldRules::neighboursAreOtherDistinctCompounds);
+            case SUGGESTIONS -> List.of(CrossFieldRules::numbersAreFinite, CrossFieldRules::ranksRunFromOne);
+            case DRIFT_METRICS -> List.of(CrossFieldRules::numbersAreFinite, CrossFieldRules::windowEndsAfterItStarts);
+            default -> List.of(CrossFieldRules::numbersAreFinite);
         };
+    }
+
+    /**
+     * finite: Jackson reads a literal beyond the double range (1e400) as infinity, which every
+     * numeric rule of JSON Schema lets through. One cheap pass finds out whether there is any; only
+     * then a second pass names the fields.
+     */
+    static void numbersAreFinite(JsonNode value, List<Violation> out) {
+        if (allFinite(value)) {
+            return;
+        }
+        reportNonFinite(value, "", out);
+    }
+
+    private static boolean allFinite(JsonNode node) {
+        if (node.isFloatingPointNumber()) {
+            return Double.isFinite(node.doubleValue());
+        }
+        if (node.isContainerNode()) {
+            for (JsonNode child : node) {
+                if (!allFinite(child)) {
+                    return false;
+                }
+            }
+        }
+        return true;
+    }
+
+    private static void reportNonFinite(JsonNode node, String pointer, List<Violation> out) {
+        if (node.isFloatingPointNumber() && !Double.isFinite(node.doubleValue())) {
+            out.add(new Violation(pointer, node.toString(), "finite", "must be a finite number"));
+        } else if (node.isArray()) {
+            for (int i = 0; i < node.size(); i++) {
+                reportNonFinite(node.get(i), pointer + "/" + i, out);
+            }
+        } else if (node.isObject()) {
+            node.fields().forEachRemaining(field ->
+                    reportNonFinite(field.getValue(), ErrorTranslation.child(pointer, field.getKey()), out));
+        }
     }
 
     /** gramSize: YᵀY is rank × rank, stored row-major. */
