@@ -62,8 +62,9 @@ final class CrossFieldRules {
                 reportNonFinite(node.get(i), pointer + "/" + i, out);
             }
         } else if (node.isObject()) {
-            node.fields().forEachRemaining(field ->
-                    reportNonFinite(field.getValue(), ErrorTranslation.child(pointer, field.getKey()), out));
+            for (var field : node.properties()) {
+                reportNonFinite(field.getValue(), ErrorTranslation.child(pointer, field.getKey()), out);
+            }
         }
     }
 

@@ -50,7 +50,7 @@ public final class SchemaValidator {
     }
 
     /**
-     * Every broken rule of {@code value}, in document order; empty when the value is valid. The
+     * Every broken rule of {@code value}; empty when the value is valid. The
      * cross-field rules run only on a value that passed the schema, so they may rely on its shape.
      */
     public List<Violation> check(JsonNode value) {
