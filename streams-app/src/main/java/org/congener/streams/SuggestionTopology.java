@@ -12,12 +12,11 @@ import org.apache.kafka.streams.kstream.Produced;
 import org.apache.kafka.streams.kstream.Repartitioned;
 import org.apache.kafka.streams.state.KeyValueStore;
 import org.apache.kafka.streams.state.Stores;
-import org.congener.schemas.CatalogEntry;
 import org.congener.schemas.DeadLetter;
-import org.congener.schemas.InventoryEvent;
-import org.congener.schemas.Researcher;
 import org.congener.schemas.Suggestions;
+import org.congener.schemas.Topic;
 import org.congener.schemas.TopicName;
+import org.congener.schemas.Topics;
 import org.congener.schemas.UsageEvent;
 import org.congener.streams.config.AppConfig;
 import org.congener.streams.processor.Intake;
@@ -69,9 +68,6 @@ public final class SuggestionTopology {
             return new Settings(config.topicPrefix(), config.topN(), config.popularityHalfLife());
         }
 
-        String topic(TopicName name) {
-            return name.withPrefix(topicPrefix);
-        }
     }
 
     private SuggestionTopology() {
@@ -83,47 +79,53 @@ public final class SuggestionTopology {
     }
 
     public static void build(StreamsBuilder builder, Settings settings, SuggestionScorer scorer) {
-        builder.globalTable(settings.topic(TopicName.CATALOG), Consumed.with(RecordSerdes.keys(), RecordSerdes.catalog()),
-                Materialized.<String, CatalogEntry, KeyValueStore<Bytes, byte[]>>as(CATALOG_STORE)
-                        .withKeySerde(RecordSerdes.keys())
-                        .withValueSerde(RecordSerdes.storeValue(TopicName.CATALOG, CatalogEntry.class)));
-        builder.globalTable(settings.topic(TopicName.RESEARCHERS), Consumed.with(RecordSerdes.keys(), RecordSerdes.researchers()),
-                Materialized.<String, Researcher, KeyValueStore<Bytes, byte[]>>as(RESEARCHERS_STORE)
-                        .withKeySerde(RecordSerdes.keys())
-                        .withValueSerde(RecordSerdes.storeValue(TopicName.RESEARCHERS, Researcher.class)));
+        Topics topics = new Topics(settings.topicPrefix());
+        globalTable(builder, topics.catalog(), CATALOG_STORE);
+        globalTable(builder, topics.researchers(), RESEARCHERS_STORE);
         // the latest stock event per compound; "in stock" means its quantity on hand is above zero
-        builder.globalTable(settings.topic(TopicName.INVENTORY_EVENTS), Consumed.with(RecordSerdes.keys(), RecordSerdes.inventoryEvents()),
-                Materialized.<String, InventoryEvent, KeyValueStore<Bytes, byte[]>>as(STOCK_STORE)
-                        .withKeySerde(RecordSerdes.keys())
-                        .withValueSerde(RecordSerdes.storeValue(TopicName.INVENTORY_EVENTS, InventoryEvent.class)));
+        globalTable(builder, topics.inventoryEvents(), STOCK_STORE);
 
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(INTERACTIONS_STORE),
                 Serdes.String(), new InteractionProfileSerde()));
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(GROUP_POPULARITY_STORE),
                 Serdes.String(), new GroupPopularitySerde()));
 
+        Topic<UsageEvent> usage = topics.usageEvents();
         KStream<String, Intake> intake = builder
-                .stream(settings.topic(TopicName.USAGE_EVENTS), Consumed.with(RecordSerdes.keys(), Serdes.ByteArray()))
-                .process(() -> new UsageEventIntake(RecordSerdes.usageEvents(), RESEARCHERS_STORE, CATALOG_STORE));
+                .stream(usage.name(), Consumed.with(usage.keySerde(), Serdes.ByteArray()))
+                .process(() -> new UsageEventIntake(usage.valueSerde(), RESEARCHERS_STORE, CATALOG_STORE));
 
+        Topic<DeadLetter> deadLetters = topics.deadLetters();
         intake.filter((key, value) -> !value.isAccepted())
                 .mapValues(Intake::deadLetter)
-                .to(settings.topic(TopicName.DEAD_LETTERS), Produced.<String, DeadLetter>with(RecordSerdes.keys(), RecordSerdes.deadLetters()));
+                .to(deadLetters.name(), Produced.with(deadLetters.keySerde(), deadLetters.valueSerde()));
 
         SuggestionProcessor.Stores stores = new SuggestionProcessor.Stores(INTERACTIONS_STORE, GROUP_POPULARITY_STORE,
                 RESEARCHERS_STORE, CATALOG_STORE, STOCK_STORE);
         double halfLifeMs = settings.popularityHalfLife().toMillis();
+        Topic<Suggestions> suggestions = topics.suggestions();
         intake.filter((key, value) -> value.isAccepted())
                 .mapValues(Intake::event)
-                .repartition(Repartitioned.<String, UsageEvent>with(RecordSerdes.keys(), RecordSerdes.usageEvents())
+                // values on the internal topic were validated a moment ago: no second validation
+                .repartition(Repartitioned.with(usage.keySerde(), RecordSerdes.storeValue(TopicName.USAGE_EVENTS, UsageEvent.class))
                         .withName(BY_GROUP_REPARTITION))
                 .process(() -> new SuggestionProcessor(stores, scorer, InteractionWeights.defaults(), halfLifeMs,
                         settings.topN()), INTERACTIONS_STORE, GROUP_POPULARITY_STORE)
-                .to(settings.topic(TopicName.SUGGESTIONS), Produced.<String, Suggestions>with(RecordSerdes.keys(), RecordSerdes.suggestions()));
+                .to(suggestions.name(), Produced.with(suggestions.keySerde(), suggestions.valueSerde()));
 
-        builder.table(settings.topic(TopicName.SUGGESTIONS), Consumed.with(RecordSerdes.keys(), RecordSerdes.suggestions()),
+        builder.table(suggestions.name(), Consumed.with(suggestions.keySerde(), suggestions.valueSerde()),
                 Materialized.<String, Suggestions, KeyValueStore<Bytes, byte[]>>as(LATEST_SUGGESTIONS_STORE)
-                        .withKeySerde(RecordSerdes.keys())
+                        .withKeySerde(suggestions.keySerde())
                         .withValueSerde(RecordSerdes.storeValue(TopicName.SUGGESTIONS, Suggestions.class)));
+    }
+
+    /** A global table over a compacted topic: validated when read from the topic, stored as the topic's JSON. */
+    @SuppressWarnings("unchecked")
+    private static <V> void globalTable(StreamsBuilder builder, Topic<V> topic, String storeName) {
+        Class<V> type = (Class<V>) topic.id().valueType();
+        builder.globalTable(topic.name(), Consumed.with(topic.keySerde(), topic.valueSerde()),
+                Materialized.<String, V, KeyValueStore<Bytes, byte[]>>as(storeName)
+                        .withKeySerde(topic.keySerde())
+                        .withValueSerde(RecordSerdes.storeValue(topic.id(), type)));
     }
 }

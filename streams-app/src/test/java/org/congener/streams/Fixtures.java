@@ -8,9 +8,9 @@ import org.congener.schemas.InventoryEvent;
 import org.congener.schemas.InventoryKind;
 import org.congener.schemas.Researcher;
 import org.congener.schemas.SchemaIds;
+import org.congener.schemas.Topics;
 import org.congener.schemas.UsageEvent;
 import org.congener.schemas.UsageKind;
-import org.congener.streams.serde.RecordSerdes;
 
 /**
  * A tiny invented lab for topology tests: group g-a (ada, ben; cyd lacks the precursor clearance)
@@ -20,6 +20,8 @@ import org.congener.streams.serde.RecordSerdes;
 public final class Fixtures {
 
     public static final String DAY0 = "2026-01-01T09:00:00Z";
+    /** Serdes of every topic; the prefix does not change them. */
+    public static final Topics TOPICS = new Topics("");
 
     private Fixtures() {
     }
@@ -34,7 +36,7 @@ public final class Fixtures {
     }
 
     public static CatalogEntry compound(String id, String name, List<String> tags, boolean active) {
-        return new CatalogEntry(SchemaIds.CATALOG_ENTRY, id, name, List.of("term:" + name), tags,
+        return new CatalogEntry(SchemaIds.CATALOG_ENTRY, id, name, List.of("term:" + id), tags,
                 List.of("H225"), active);
     }
 
@@ -62,6 +64,6 @@ public final class Fixtures {
 
     /** The event as it travels on the topic: JSON text. */
     public static String json(UsageEvent event) {
-        return new String(RecordSerdes.usageEvents().serializer().serialize("t", event), StandardCharsets.UTF_8);
+        return new String(TOPICS.usageEvents().valueSerde().serializer().serialize("t", event), StandardCharsets.UTF_8);
     }
 }

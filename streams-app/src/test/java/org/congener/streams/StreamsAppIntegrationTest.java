@@ -36,7 +36,6 @@ import org.congener.schemas.TopicName;
 import org.congener.schemas.UsageEvent;
 import org.congener.schemas.UsageKind;
 import org.congener.streams.config.AppConfig;
-import org.congener.streams.serde.RecordSerdes;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
@@ -60,11 +59,11 @@ class StreamsAppIntegrationTest {
         try (KafkaProducer<String, String> producer = producer(bootstrap)) {
             for (var entry : Fixtures.catalog()) {
                 producer.send(new ProducerRecord<>(prefix + "catalog", entry.compoundId(),
-                        text(RecordSerdes.catalog().serializer().serialize("", entry))));
+                        text(Fixtures.TOPICS.catalog().valueSerde().serializer().serialize("", entry))));
             }
             for (var researcher : Fixtures.researchers()) {
                 producer.send(new ProducerRecord<>(prefix + "researchers", researcher.researcherId(),
-                        text(RecordSerdes.researchers().serializer().serialize("", researcher))));
+                        text(Fixtures.TOPICS.researchers().valueSerde().serializer().serialize("", researcher))));
             }
             producer.flush();
         }
@@ -95,7 +94,7 @@ class StreamsAppIntegrationTest {
             }
 
             List<Suggestions> out = readAll(bootstrap, TopicName.SUGGESTIONS.withPrefix(prefix),
-                    RecordSerdes.suggestions().deserializer(), 4);
+                    Fixtures.TOPICS.suggestions().valueSerde().deserializer(), 4);
             assertEquals(List.of("g1", "g2", "g3", "g4"),
                     out.stream().map(Suggestions::causedByEventId).sorted().toList());
             Suggestions forAda = out.stream().filter(s -> s.researcherId().equals("ada")).findFirst().orElseThrow();
@@ -103,7 +102,7 @@ class StreamsAppIntegrationTest {
                     forAda.items().stream().map(i -> i.compoundId()).sorted().toList());
 
             List<DeadLetter> letters = readAll(bootstrap, TopicName.DEAD_LETTERS.withPrefix(prefix),
-                    RecordSerdes.deadLetters().deserializer(), 1);
+                    Fixtures.TOPICS.deadLetters().valueSerde().deserializer(), 1);
             assertEquals(1, letters.size());
             assertEquals("this is not JSON", letters.get(0).payload());
             assertEquals(TopicName.USAGE_EVENTS.withPrefix(prefix), letters.get(0).sourceTopic());

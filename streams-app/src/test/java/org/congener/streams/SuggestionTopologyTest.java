@@ -29,7 +29,6 @@ import org.congener.schemas.Suggestions;
 import org.congener.schemas.UsageEvent;
 import org.congener.schemas.UsageKind;
 import org.congener.streams.processor.DeadLetteringDeserializationHandler;
-import org.congener.streams.serde.RecordSerdes;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -60,18 +59,18 @@ class SuggestionTopologyTest {
         driver = new TopologyTestDriver(builder.build(), props);
 
         TestInputTopic<String, CatalogEntry> catalog = driver.createInputTopic("lab.catalog",
-                new StringSerializer(), RecordSerdes.catalog().serializer());
+                new StringSerializer(), Fixtures.TOPICS.catalog().valueSerde().serializer());
         Fixtures.catalog().forEach(entry -> catalog.pipeInput(entry.compoundId(), entry));
         TestInputTopic<String, Researcher> researchers = driver.createInputTopic("lab.researchers",
-                new StringSerializer(), RecordSerdes.researchers().serializer());
+                new StringSerializer(), Fixtures.TOPICS.researchers().valueSerde().serializer());
         Fixtures.researchers().forEach(r -> researchers.pipeInput(r.researcherId(), r));
         inventory = driver.createInputTopic("lab.inventory-events", new StringSerializer(),
-                RecordSerdes.inventoryEvents().serializer());
+                Fixtures.TOPICS.inventoryEvents().valueSerde().serializer());
         usage = driver.createInputTopic("lab.usage-events", new StringSerializer(), new StringSerializer());
         suggestions = driver.createOutputTopic("lab.suggestions", new StringDeserializer(),
-                RecordSerdes.suggestions().deserializer());
+                Fixtures.TOPICS.suggestions().valueSerde().deserializer());
         deadLetters = driver.createOutputTopic("lab.dead-letters", new StringDeserializer(),
-                RecordSerdes.deadLetters().deserializer());
+                Fixtures.TOPICS.deadLetters().valueSerde().deserializer());
     }
 
     @AfterEach
@@ -181,7 +180,8 @@ class SuggestionTopologyTest {
             assertEquals(0, letter.partition());
             assertEquals("utf-8", letter.payloadEncoding());
         }
-        assertTrue(letters.get(0).reason().startsWith("not a valid UsageEvent"), letters.get(0).reason());
+        assertTrue(letters.get(0).reason().startsWith("usage-events: unreadable value: not valid JSON"),
+                letters.get(0).reason());
         assertEquals("unknown researcher 'zed'", letters.get(1).reason());
         assertEquals("unknown compound 'c-unobtainium'", letters.get(2).reason());
         assertTrue(letters.get(0).payload().contains("\"eventId\": "), "raw payload kept");

@@ -9,8 +9,10 @@ import org.apache.kafka.clients.producer.ProducerRecord;
 import org.apache.kafka.streams.errors.DeserializationExceptionHandler;
 import org.apache.kafka.streams.errors.ErrorHandlerContext;
 import org.congener.schemas.DeadLetter;
-import org.congener.schemas.TopicName;
-import org.congener.streams.serde.RecordSerdes;
+import org.congener.schemas.DeadLetters;
+import org.congener.schemas.Topic;
+import org.congener.schemas.Topics;
+import org.congener.schemas.validation.InvalidRecordException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
@@ -29,22 +31,23 @@ public final class DeadLetteringDeserializationHandler implements Deserializatio
 
     private static final Logger LOG = LoggerFactory.getLogger(DeadLetteringDeserializationHandler.class);
 
-    private String deadLetterTopic = TopicName.DEAD_LETTERS.baseName();
+    private Topic<DeadLetter> deadLetters = new Topics("").deadLetters();
 
     @Override
     public void configure(Map<String, ?> configs) {
         Object prefix = configs.get(TOPIC_PREFIX_CONFIG);
-        deadLetterTopic = TopicName.DEAD_LETTERS.withPrefix(prefix == null ? "" : prefix.toString());
+        deadLetters = new Topics(prefix == null ? "" : prefix.toString()).deadLetters();
     }
 
     @Override
     public Response handleError(ErrorHandlerContext context, ConsumerRecord<byte[], byte[]> record, Exception exception) {
-        String reason = exception.getMessage() == null ? exception.getClass().getSimpleName() : exception.getMessage();
+        String reason = exception instanceof InvalidRecordException invalid ? invalid.reason()
+                : exception.getMessage() == null ? exception.getClass().getSimpleName() : exception.getMessage();
         LOG.warn("dead letter from {} partition {} offset {}: {}", record.topic(), record.partition(), record.offset(),
                 reason);
-        DeadLetter letter = DeadLetterFactory.of(record.topic(), record.partition(), record.offset(), reason,
+        DeadLetter letter = DeadLetters.of(record.topic(), record.partition(), record.offset(), reason,
                 record.value(), Instant.now());
-        byte[] value = RecordSerdes.deadLetters().serializer().serialize(deadLetterTopic, letter);
-        return Response.resume(List.of(new ProducerRecord<>(deadLetterTopic, record.key(), value)));
+        byte[] value = deadLetters.valueSerde().serializer().serialize(deadLetters.name(), letter);
+        return Response.resume(List.of(new ProducerRecord<>(deadLetters.name(), record.key(), value)));
     }
 }

@@ -10,6 +10,7 @@ import org.apache.kafka.streams.processor.api.Record;
 import org.apache.kafka.streams.processor.api.RecordMetadata;
 import org.congener.schemas.CatalogEntry;
 import org.congener.schemas.DeadLetter;
+import org.congener.schemas.DeadLetters;
 import org.congener.schemas.Researcher;
 import org.congener.schemas.UsageEvent;
 import org.congener.streams.serde.RecordRejectedException;
@@ -62,7 +63,7 @@ public final class UsageEventIntake implements Processor<String, byte[], String,
             int partition = source == null ? -1 : source.partition();
             long offset = source == null ? -1 : source.offset();
             LOG.warn("dead letter from {} partition {} offset {}: {}", topic, partition, offset, e.reason());
-            DeadLetter letter = DeadLetterFactory.of(topic, partition, offset, e.reason(), record.value(),
+            DeadLetter letter = DeadLetters.of(topic, partition, offset, e.reason(), record.value(),
                     Instant.ofEpochMilli(context.currentSystemTimeMs()));
             deadLetters.record();
             context.forward(record.withValue(Intake.rejected(letter)));
