@@ -58,17 +58,22 @@ final class DemoRandom {
 
     /** Index drawn with probability proportional to {@code weights[i]}; all weights non-negative, sum > 0. */
     int weightedIndex(double[] weights) {
+        return weightedIndex(weights, 0, weights.length);
+    }
+
+    /** As {@link #weightedIndex(double[])} over {@code weights[from..until)}; returns an offset from {@code from}. */
+    int weightedIndex(double[] weights, int from, int until) {
         double total = 0;
-        for (double w : weights) {
-            total += w;
+        for (int i = from; i < until; i++) {
+            total += weights[i];
         }
         double target = random.nextDouble() * total;
-        for (int i = 0; i < weights.length; i++) {
+        for (int i = from; i < until; i++) {
             target -= weights[i];
             if (target < 0) {
-                return i;
+                return i - from;
             }
         }
-        return weights.length - 1;
+        return until - 1 - from;
     }
 }

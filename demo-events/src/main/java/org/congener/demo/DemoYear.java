@@ -20,6 +20,14 @@ final class DemoYear {
     private static final double[] HOUR_WEIGHTS = {
             0, 0, 0, 0, 0, 0, 0.1, 0.4, 1.2, 2.0, 2.4, 2.3, 1.4, 1.8, 2.1, 2.0, 1.6, 1.0, 0.5, 0.3, 0.2, 0.1, 0.05, 0};
 
+    private static final double[] DAY_WEIGHTS = new double[DAYS];
+
+    static {
+        for (int d = 0; d < DAYS; d++) {
+            DAY_WEIGHTS[d] = dayWeight(d);
+        }
+    }
+
     private DemoYear() {
     }
 
@@ -41,11 +49,7 @@ final class DemoYear {
 
     /** A working moment on a day in [fromDay, untilDay), as epoch seconds. */
     static long sampleMoment(DemoRandom random, int fromDay, int untilDay) {
-        double[] weights = new double[untilDay - fromDay];
-        for (int d = 0; d < weights.length; d++) {
-            weights[d] = dayWeight(fromDay + d);
-        }
-        int day = fromDay + random.weightedIndex(weights);
+        int day = fromDay + random.weightedIndex(DAY_WEIGHTS, fromDay, untilDay);
         return momentOn(random, day);
     }
 

@@ -4,23 +4,24 @@ import org.congener.schemas.UsageKind;
 
 /**
  * Realistic amounts per kind of event and physical form, in thousandths of the form's unit
- * (integers keep stock arithmetic exact). Orders and withdrawals come in usual pack and aliquot
- * sizes; usage-log entries are log-normal around a typical bench amount; a view has no quantity.
+ * (integers keep stock arithmetic exact). Orders come in usual pack sizes; a withdrawal takes a
+ * container or a part of one from the stores; usage-log entries are log-normal around a typical
+ * bench amount; a view has no quantity.
  * The sizes are common laboratory practice, chosen for the demo.
  */
 final class QuantityModel {
 
     private static final double[] LIQUID_ORDER = {100, 250, 500, 1000, 2500};
     private static final double[] LIQUID_ORDER_W = {2, 3, 3, 2, 1};
-    private static final double[] LIQUID_WITHDRAWAL = {5, 10, 25, 50, 100, 250};
-    private static final double[] LIQUID_WITHDRAWAL_W = {2, 3, 3, 2, 1, 0.5};
+    private static final double[] LIQUID_WITHDRAWAL = {25, 50, 100, 250, 500, 1000};
+    private static final double[] LIQUID_WITHDRAWAL_W = {1, 2, 3, 3, 2, 1};
     private static final double[] SOLID_ORDER = {1, 5, 10, 25, 100, 250, 500};
     private static final double[] SOLID_ORDER_W = {1, 3, 2, 3, 2, 1, 0.5};
-    private static final double[] SOLID_WITHDRAWAL = {0.5, 1, 2, 5, 10, 25};
-    private static final double[] SOLID_WITHDRAWAL_W = {2, 3, 3, 2, 1, 0.5};
+    private static final double[] SOLID_WITHDRAWAL = {1, 5, 10, 25, 50, 100};
+    private static final double[] SOLID_WITHDRAWAL_W = {2, 3, 3, 2, 1, 1};
     private static final double[] SMALL_ORDER = {50, 100, 250, 500, 1000};
     private static final double[] SMALL_ORDER_W = {2, 3, 3, 2, 1};
-    private static final double[] SMALL_WITHDRAWAL = {5, 10, 25, 50, 100};
+    private static final double[] SMALL_WITHDRAWAL = {25, 50, 100, 250, 500};
     private static final double[] SMALL_WITHDRAWAL_W = {2, 3, 3, 2, 1};
     private static final double[] GAS_ORDER = {10, 50};
     private static final double[] GAS_ORDER_W = {2, 1};
