@@ -41,6 +41,9 @@ final class CatalogueBuilder {
             }
             List<String> termIds = new ArrayList<>();
             for (String number : list(fields[2])) {
+                if (!number.matches("\\d{1,7}")) {
+                    throw new IllegalArgumentException(where + ": term number '" + number + "' is not 1 to 7 digits");
+                }
                 String id = String.format(Locale.ROOT, "CGNR:%07d", Integer.parseInt(number));
                 if (!ontology.isActiveTerm(id)) {
                     throw new IllegalArgumentException(where + ": " + id + " is not an active ontology term");
@@ -67,7 +70,13 @@ final class CatalogueBuilder {
                 case "x" -> false;
                 default -> throw new IllegalArgumentException(where + ": status must be empty or x");
             };
-            compounds.add(new SourceCompound(fields[0], PhysicalForm.ofCode(fields[1]), List.copyOf(termIds),
+            PhysicalForm form;
+            try {
+                form = PhysicalForm.ofCode(fields[1]);
+            } catch (IllegalArgumentException e) {
+                throw new IllegalArgumentException(where + ": " + e.getMessage(), e);
+            }
+            compounds.add(new SourceCompound(fields[0], form, List.copyOf(termIds),
                     tags, hazards, active));
         }
         return List.copyOf(compounds);
