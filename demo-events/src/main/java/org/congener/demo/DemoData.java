@@ -16,7 +16,7 @@ import java.util.List;
  * The shipped demo scenario of the invented Kestrelmoor institute: its ontology, catalogue,
  * researchers, groups and a year of usage and inventory events (seed {@link DemoGenerator#DEFAULT_SEED}).
  * All of it is invented demo data; hazard codes are illustrative, not a safety data source.
- * Lists are immutable and read once per JVM.
+ * Lists, and the lists inside their records, are immutable; the files are read once per JVM.
  */
 public final class DemoData {
 
@@ -78,8 +78,14 @@ public final class DemoData {
 
     /** Loaded on first use, once (holder idiom). */
     private static final class Loaded {
-        static final List<CatalogEntry> CATALOG = readJsonLines(DemoGenerator.CATALOG_FILE, CatalogEntry.class);
-        static final List<Researcher> RESEARCHERS = readJsonLines(DemoGenerator.RESEARCHERS_FILE, Researcher.class);
+        static final List<CatalogEntry> CATALOG = readJsonLines(DemoGenerator.CATALOG_FILE, CatalogEntry.class).stream()
+                .map(c -> new CatalogEntry(c.schema(), c.compoundId(), c.name(), List.copyOf(c.termIds()),
+                        List.copyOf(c.restrictionTags()), List.copyOf(c.hazardCodes()), c.active()))
+                .toList();
+        static final List<Researcher> RESEARCHERS = readJsonLines(DemoGenerator.RESEARCHERS_FILE, Researcher.class).stream()
+                .map(r -> new Researcher(r.schema(), r.researcherId(), r.name(), r.groupId(),
+                        List.copyOf(r.authorisations()), r.alertOptIn()))
+                .toList();
         static final List<UsageEvent> USAGE = readJsonLines(DemoGenerator.USAGE_EVENTS_FILE, UsageEvent.class);
         static final List<InventoryEvent> INVENTORY = readJsonLines(DemoGenerator.INVENTORY_EVENTS_FILE, InventoryEvent.class);
         static final List<String> BAD_LINES = List.copyOf(DemoResources.lines(DemoGenerator.BAD_USAGE_EVENTS_FILE));
@@ -87,8 +93,9 @@ public final class DemoData {
 
         private static List<DemoGroup> readGroups() {
             try {
-                return List.copyOf(DemoJson.mapper().readValue(DemoResources.bytes(DemoGenerator.GROUPS_FILE),
-                        new TypeReference<List<DemoGroup>>() { }));
+                List<DemoGroup> groups = DemoJson.mapper().readValue(DemoResources.bytes(DemoGenerator.GROUPS_FILE),
+                        new TypeReference<List<DemoGroup>>() { });
+                return groups.stream().map(g -> new DemoGroup(g.groupId(), g.name(), List.copyOf(g.interests()))).toList();
             } catch (IOException e) {
                 throw new UncheckedIOException("cannot read " + DemoGenerator.GROUPS_FILE, e);
             }

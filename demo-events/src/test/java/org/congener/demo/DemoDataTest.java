@@ -39,6 +39,13 @@ class DemoDataTest {
     }
 
     @Test
+    void shouldHandOutListsThatCannotBeChanged() {
+        assertThrows(UnsupportedOperationException.class, () -> DemoData.catalog().get(0).termIds().add("CGNR:0000001"));
+        assertThrows(UnsupportedOperationException.class, () -> DemoData.researchers().get(0).authorisations().clear());
+        assertThrows(UnsupportedOperationException.class, () -> DemoData.usageEvents().remove(0));
+    }
+
+    @Test
     void shouldNameAnInventedInstitute() {
         assertEquals("Kestrelmoor Institute for Molecular Sciences", DemoData.institutName());
     }
