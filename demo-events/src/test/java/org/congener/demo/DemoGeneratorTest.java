@@ -15,6 +15,7 @@ import java.util.Map;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 class DemoGeneratorTest {
@@ -32,6 +33,7 @@ class DemoGeneratorTest {
 
     @Test
     void shouldWriteByteIdenticalFilesWhenRunTwiceWithTheSameSeed() throws Exception {
+        assertNotEquals(first, second);
         for (String file : DemoGenerator.FILES) {
             assertArrayEquals(Files.readAllBytes(first.resolve(file)), Files.readAllBytes(second.resolve(file)), file);
         }
