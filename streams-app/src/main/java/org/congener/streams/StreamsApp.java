@@ -6,6 +6,7 @@ import java.util.Properties;
 
 import org.apache.kafka.common.Metric;
 import org.apache.kafka.common.MetricName;
+import org.apache.kafka.streams.CloseOptions;
 import org.apache.kafka.streams.KafkaStreams;
 import org.apache.kafka.streams.StreamsBuilder;
 import org.apache.kafka.streams.Topology;
@@ -104,10 +105,15 @@ public final class StreamsApp implements AutoCloseable {
         return Math.round(total);
     }
 
-    /** Stops the query API, then Kafka Streams (committing its work). */
+    /**
+     * Stops the query API, then Kafka Streams (committing its work). The instance leaves its consumer
+     * group, so that a restart with the same application id gets its tasks at once instead of after the
+     * session timeout (45 s by default).
+     */
     @Override
     public void close() {
         server.close();
-        streams.close(CLOSE_TIMEOUT);
+        streams.close(CloseOptions.groupMembershipOperation(CloseOptions.GroupMembershipOperation.LEAVE_GROUP)
+                .withTimeout(CLOSE_TIMEOUT));
     }
 }

@@ -17,9 +17,9 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.json.JsonMapper;
 import com.sun.net.httpserver.HttpExchange;
 import com.sun.net.httpserver.HttpServer;
+import org.congener.schemas.Json;
 import org.congener.schemas.Suggestions;
 import org.congener.streams.SafetyCaution;
 
@@ -35,7 +35,7 @@ import org.congener.streams.SafetyCaution;
 public final class QueryServer implements AutoCloseable {
 
     private static final Pattern SUGGESTIONS_PATH = Pattern.compile("^/researchers/([^/]+)/suggestions/?$");
-    private static final ObjectMapper JSON = JsonMapper.builder().build();
+    private static final ObjectMapper JSON = Json.mapper();
 
     private final HttpServer server;
     private final ExecutorService executor;
