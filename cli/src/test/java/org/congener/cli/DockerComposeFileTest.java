@@ -126,6 +126,10 @@ class DockerComposeFileTest {
         assertEquals(AppConfig.DEFAULT_APPLICATION_ID, config.applicationId());
         assertEquals(AppConfig.DEFAULT_HTTP_PORT, config.httpPort());
         assertEquals(AppConfig.DEFAULT_TOP_N, config.topN());
+        if (config.httpHost().equals("0.0.0.0")) {
+            assertEquals("streams:" + config.httpPort(), config.httpAdvertisedAddress(),
+                    "other instances need a reachable address when the app listens on every interface");
+        }
         assertEquals(services.get("topics").get("environment").get("CONGENER_TOPIC_PREFIX").asText(), config.topicPrefix());
         assertTrue(strings(streams.get("ports")).contains("127.0.0.1:" + config.httpPort() + ":" + config.httpPort()));
         assertEquals("service_completed_successfully",

@@ -9,8 +9,10 @@ import org.apache.kafka.common.MetricName;
 import org.apache.kafka.streams.CloseOptions;
 import org.apache.kafka.streams.KafkaStreams;
 import org.apache.kafka.streams.StreamsBuilder;
+import org.apache.kafka.streams.StreamsConfig;
 import org.apache.kafka.streams.Topology;
 import org.apache.kafka.streams.errors.StreamsUncaughtExceptionHandler;
+import org.apache.kafka.streams.state.HostInfo;
 import org.congener.streams.api.QueryServer;
 import org.congener.streams.api.StoreSuggestionQueries;
 import org.congener.streams.config.AppConfig;
@@ -39,16 +41,27 @@ public final class StreamsApp implements AutoCloseable {
         StreamsBuilder builder = new StreamsBuilder();
         SuggestionTopology.build(builder, SuggestionTopology.Settings.from(config));
         Topology topology = builder.build();
+        // open the port first: a taken port fails before Kafka Streams starts anything, and port 0
+        // is bound to a real port that can go into application.server
+        StoreSuggestionQueries queries = new StoreSuggestionQueries(config.topN());
+        QueryServer server = QueryServer.start(config.httpHost(), config.httpPort(), queries);
+        String advertised = config.httpAdvertisedAddress().isEmpty()
+                ? config.httpHost() + ":" + server.port() : config.httpAdvertisedAddress();
         Properties props = new Properties();
         props.putAll(config.streamsProperties());
-        KafkaStreams streams = new KafkaStreams(topology, props);
+        props.put(StreamsConfig.APPLICATION_SERVER_CONFIG, advertised);
+        KafkaStreams streams;
+        try {
+            streams = new KafkaStreams(topology, props);
+        } catch (RuntimeException e) {
+            server.close();
+            throw e;
+        }
         streams.setUncaughtExceptionHandler(exception -> {
             LOG.error("stream thread failed; replacing it", exception);
             return StreamsUncaughtExceptionHandler.StreamThreadExceptionResponse.REPLACE_THREAD;
         });
-        // open the port first: a taken port should fail before Kafka Streams starts anything
-        StoreSuggestionQueries queries = new StoreSuggestionQueries(streams, config.topN(), () -> deadLetters(streams));
-        QueryServer server = QueryServer.start(config.httpHost(), config.httpPort(), queries);
+        queries.attach(streams, HostInfo.buildFromEndpoint(advertised), () -> deadLetters(streams));
         try {
             streams.start();
         } catch (RuntimeException e) {

@@ -55,26 +55,9 @@ class StreamsAppIntegrationTest {
     void shouldPublishSuggestionsDeadLettersAndServeThemWhenEventsFlowThroughBroker() throws Exception {
         String prefix = SharedBroker.uniquePrefix("streams-app");
         String bootstrap = SharedBroker.bootstrapServers();
-        TopicAdmin.createAll(bootstrap, prefix, 2, (short) 1);
-        try (KafkaProducer<String, String> producer = producer(bootstrap)) {
-            for (var entry : Fixtures.catalog()) {
-                producer.send(new ProducerRecord<>(prefix + "catalog", entry.compoundId(),
-                        text(Fixtures.TOPICS.catalog().valueSerde().serializer().serialize("", entry))));
-            }
-            for (var researcher : Fixtures.researchers()) {
-                producer.send(new ProducerRecord<>(prefix + "researchers", researcher.researcherId(),
-                        text(Fixtures.TOPICS.researchers().valueSerde().serializer().serialize("", researcher))));
-            }
-            producer.flush();
-        }
-
-        AppConfig config = AppConfig.defaults().with(Map.of(
-                AppConfig.BOOTSTRAP_SERVERS, bootstrap,
-                AppConfig.TOPIC_PREFIX, prefix,
-                AppConfig.APPLICATION_ID, SharedBroker.uniqueApplicationId("streams-app"),
-                AppConfig.STATE_DIR, stateDir.toString(),
-                AppConfig.HTTP_PORT, "0",
-                AppConfig.TOP_N, "3"));
+        prepareTopics(bootstrap, prefix);
+        AppConfig config = config(bootstrap, prefix, SharedBroker.uniqueApplicationId("streams-app"),
+                stateDir.resolve("only"));
         try (StreamsApp app = StreamsApp.start(config)) {
             assertTrue(app.awaitRunning(WAIT), "streams app reached RUNNING");
 
@@ -130,6 +113,64 @@ class StreamsAppIntegrationTest {
             assertEquals(1, healthBody.get("deadLetters").asLong());
             assertEquals(1, app.deadLetterCount());
         }
+    }
+
+    @Test
+    void shouldAnswerForEveryResearcherOnEitherInstanceWhenTwoInstancesShareTheWork() throws Exception {
+        String prefix = SharedBroker.uniquePrefix("two-instances");
+        String bootstrap = SharedBroker.bootstrapServers();
+        prepareTopics(bootstrap, prefix);
+        String applicationId = SharedBroker.uniqueApplicationId("two-instances");
+        try (StreamsApp first = StreamsApp.start(config(bootstrap, prefix, applicationId, stateDir.resolve("a")));
+             StreamsApp second = StreamsApp.start(config(bootstrap, prefix, applicationId, stateDir.resolve("b")))) {
+            assertTrue(first.awaitRunning(WAIT) && second.awaitRunning(WAIT), "both instances running");
+            List<String> researchers = List.of("ada", "ben", "cyd", "dee");
+            try (KafkaProducer<String, String> producer = producer(bootstrap)) {
+                int n = 0;
+                for (String researcher : researchers) {
+                    UsageEvent event = Fixtures.event("t" + (++n), researcher, "c-ethanol", UsageKind.ORDER,
+                            "2026-01-0" + n + "T10:00:00Z");
+                    producer.send(new ProducerRecord<>(TopicName.USAGE_EVENTS.withPrefix(prefix), researcher,
+                            Fixtures.json(event)));
+                }
+            }
+            assertEquals(4, readAll(bootstrap, TopicName.SUGGESTIONS.withPrefix(prefix),
+                    Fixtures.TOPICS.suggestions().valueSerde().deserializer(), 4).size());
+
+            // each list lives on one instance, so the other one must forward the query to it
+            for (StreamsApp app : List.of(first, second)) {
+                for (String researcher : researchers) {
+                    JsonNode body = awaitOk(app.baseUrl() + "/researchers/" + researcher + "/suggestions");
+                    assertEquals(researcher, body.get("researcherId").asText());
+                    assertEquals(SafetyCaution.TEXT, body.get("caution").asText());
+                }
+            }
+        }
+    }
+
+    private static void prepareTopics(String bootstrap, String prefix) throws Exception {
+        TopicAdmin.createAll(bootstrap, prefix, 2, (short) 1);
+        try (KafkaProducer<String, String> producer = producer(bootstrap)) {
+            for (var entry : Fixtures.catalog()) {
+                producer.send(new ProducerRecord<>(prefix + "catalog", entry.compoundId(),
+                        text(Fixtures.TOPICS.catalog().valueSerde().serializer().serialize("", entry))));
+            }
+            for (var researcher : Fixtures.researchers()) {
+                producer.send(new ProducerRecord<>(prefix + "researchers", researcher.researcherId(),
+                        text(Fixtures.TOPICS.researchers().valueSerde().serializer().serialize("", researcher))));
+            }
+            producer.flush();
+        }
+    }
+
+    private static AppConfig config(String bootstrap, String prefix, String applicationId, Path stateDir) {
+        return AppConfig.defaults().with(Map.of(
+                AppConfig.BOOTSTRAP_SERVERS, bootstrap,
+                AppConfig.TOPIC_PREFIX, prefix,
+                AppConfig.APPLICATION_ID, applicationId,
+                AppConfig.STATE_DIR, stateDir.toString(),
+                AppConfig.HTTP_PORT, "0",
+                AppConfig.TOP_N, "3"));
     }
 
     private JsonNode awaitOk(String url) throws Exception {

@@ -112,7 +112,8 @@ public final class QueryServer implements AutoCloseable {
         Matcher matcher = SUGGESTIONS_PATH.matcher(path);
         if (matcher.matches()) {
             String researcherId = URLDecoder.decode(matcher.group(1), StandardCharsets.UTF_8);
-            return suggestions(researcherId, uri.getRawQuery());
+            boolean forwarded = exchange.getRequestHeaders().getFirst(RemoteSuggestions.FORWARDED_HEADER) != null;
+            return suggestions(researcherId, uri.getRawQuery(), forwarded);
         }
         return error(404, "no such resource: " + path + " (try /researchers/{id}/suggestions or /health)");
     }
@@ -127,7 +128,7 @@ public final class QueryServer implements AutoCloseable {
         return new Response(health.serving() ? 200 : 503, body);
     }
 
-    private Response suggestions(String researcherId, String rawQuery) {
+    private Response suggestions(String researcherId, String rawQuery, boolean forwarded) {
         Map<String, String> params;
         try {
             params = parseQuery(rawQuery);
@@ -154,7 +155,7 @@ public final class QueryServer implements AutoCloseable {
         if (!queries.isKnownResearcher(researcherId)) {
             return error(404, "unknown researcher '" + researcherId + "'");
         }
-        Optional<Suggestions> latest = queries.latest(researcherId);
+        Optional<Suggestions> latest = queries.latest(researcherId, forwarded);
         if (latest.isEmpty()) {
             return error(404, "no suggestions yet for researcher '" + researcherId
                     + "': they appear after the researcher's first usage event");

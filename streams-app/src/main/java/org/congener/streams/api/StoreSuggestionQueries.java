@@ -3,9 +3,12 @@ package org.congener.streams.api;
 import java.util.Optional;
 import java.util.function.LongSupplier;
 
+import org.apache.kafka.common.serialization.Serdes;
 import org.apache.kafka.streams.KafkaStreams;
+import org.apache.kafka.streams.KeyQueryMetadata;
 import org.apache.kafka.streams.StoreQueryParameters;
 import org.apache.kafka.streams.errors.InvalidStateStoreException;
+import org.apache.kafka.streams.state.HostInfo;
 import org.apache.kafka.streams.state.QueryableStoreTypes;
 import org.apache.kafka.streams.state.ReadOnlyKeyValueStore;
 import org.congener.schemas.Researcher;
@@ -13,45 +16,74 @@ import org.congener.schemas.Suggestions;
 import org.congener.streams.SuggestionTopology;
 
 /**
- * Answers queries from this instance's stores: the {@code latest-suggestions} table and the
- * researchers global table. With several instances, a key may live on another one; this class then
- * answers "no suggestions yet" (forwarding to the owner via {@code queryMetadataForKey} is left open).
+ * Answers queries from the streams app's stores. The {@code latest-suggestions} table is partitioned by
+ * researcher; Kafka Streams' metadata ({@code queryMetadataForKey}) says which instance holds a
+ * researcher's partition, and a query for a list held elsewhere is forwarded to that instance's query
+ * API. The researchers table is global, so every instance answers "is this a researcher" itself.
  */
 public final class StoreSuggestionQueries implements SuggestionQueries {
 
-    private final KafkaStreams streams;
     private final int maxItems;
-    private final LongSupplier deadLetters;
+    private final RemoteSuggestions remote = new RemoteSuggestions();
+    private volatile KafkaStreams streams;
+    private volatile HostInfo self;
+    private volatile LongSupplier deadLetters = () -> 0;
 
-    public StoreSuggestionQueries(KafkaStreams streams, int maxItems, LongSupplier deadLetters) {
-        this.streams = streams;
+    public StoreSuggestionQueries(int maxItems) {
         this.maxItems = maxItems;
+    }
+
+    /**
+     * Connects the queries to the running app; until then every query answers "not ready".
+     *
+     * @param self the address in {@code application.server}, i.e. how other instances reach this one
+     */
+    public void attach(KafkaStreams streams, HostInfo self, LongSupplier deadLetters) {
+        this.self = self;
         this.deadLetters = deadLetters;
+        this.streams = streams;
     }
 
     @Override
-    public Optional<Suggestions> latest(String researcherId) {
-        ReadOnlyKeyValueStore<String, Suggestions> store = store(SuggestionTopology.LATEST_SUGGESTIONS_STORE);
+    public Optional<Suggestions> latest(String researcherId, boolean localOnly) {
+        KafkaStreams app = running();
+        if (!localOnly) {
+            KeyQueryMetadata metadata = app.queryMetadataForKey(SuggestionTopology.LATEST_SUGGESTIONS_STORE,
+                    researcherId, Serdes.String().serializer());
+            if (metadata == null || KeyQueryMetadata.NOT_AVAILABLE.equals(metadata)) {
+                throw new NotReadyException("no instance holds researcher '" + researcherId
+                        + "' right now (streams state " + app.state() + "); try again shortly");
+            }
+            if (!metadata.activeHost().equals(self)) {
+                return remote.fetch(metadata.activeHost(), researcherId);
+            }
+        }
+        ReadOnlyKeyValueStore<String, Suggestions> store = store(app, SuggestionTopology.LATEST_SUGGESTIONS_STORE);
         try {
             return Optional.ofNullable(store.get(researcherId));
         } catch (InvalidStateStoreException e) {
-            throw notReady(SuggestionTopology.LATEST_SUGGESTIONS_STORE);
+            throw notReady(app, SuggestionTopology.LATEST_SUGGESTIONS_STORE);
         }
     }
 
     @Override
     public boolean isKnownResearcher(String researcherId) {
-        ReadOnlyKeyValueStore<String, Researcher> store = store(SuggestionTopology.RESEARCHERS_STORE);
+        KafkaStreams app = running();
+        ReadOnlyKeyValueStore<String, Researcher> store = store(app, SuggestionTopology.RESEARCHERS_STORE);
         try {
             return store.get(researcherId) != null;
         } catch (InvalidStateStoreException e) {
-            throw notReady(SuggestionTopology.RESEARCHERS_STORE);
+            throw notReady(app, SuggestionTopology.RESEARCHERS_STORE);
         }
     }
 
     @Override
     public Health health() {
-        KafkaStreams.State state = streams.state();
+        KafkaStreams app = streams;
+        if (app == null) {
+            return new Health("STARTING", false, 0);
+        }
+        KafkaStreams.State state = app.state();
         return new Health(state.name(), state == KafkaStreams.State.RUNNING, deadLetters.getAsLong());
     }
 
@@ -60,16 +92,24 @@ public final class StoreSuggestionQueries implements SuggestionQueries {
         return maxItems;
     }
 
-    private <V> ReadOnlyKeyValueStore<String, V> store(String name) {
+    private KafkaStreams running() {
+        KafkaStreams app = streams;
+        if (app == null) {
+            throw new NotReadyException("the streams app is starting; try again shortly");
+        }
+        return app;
+    }
+
+    private static <V> ReadOnlyKeyValueStore<String, V> store(KafkaStreams app, String name) {
         try {
-            return streams.store(StoreQueryParameters.fromNameAndType(name, QueryableStoreTypes.<String, V>keyValueStore()));
+            return app.store(StoreQueryParameters.fromNameAndType(name, QueryableStoreTypes.<String, V>keyValueStore()));
         } catch (InvalidStateStoreException e) {
-            throw notReady(name);
+            throw notReady(app, name);
         }
     }
 
-    private NotReadyException notReady(String name) {
-        return new NotReadyException("store " + name + " is not ready (streams state " + streams.state()
+    private static NotReadyException notReady(KafkaStreams app, String name) {
+        return new NotReadyException("store " + name + " is not ready (streams state " + app.state()
                 + "); try again shortly");
     }
 }

@@ -7,8 +7,12 @@ import org.congener.schemas.Suggestions;
 /** What the query API reads; backed by the streams app's stores, or by a fake in tests. */
 public interface SuggestionQueries {
 
-    /** The latest list of the researcher, empty when none was published yet. */
-    Optional<Suggestions> latest(String researcherId);
+    /**
+     * The latest list of the researcher, empty when none was published yet.
+     *
+     * @param localOnly answer from this instance's stores only (the request was forwarded here)
+     */
+    Optional<Suggestions> latest(String researcherId, boolean localOnly);
 
     /** Whether the researcher is in the researchers table. */
     boolean isKnownResearcher(String researcherId);

@@ -29,6 +29,7 @@ public final class AppConfig extends AbstractConfig {
     public static final String COMMIT_INTERVAL_MS = "commit.interval.ms";
     public static final String HTTP_HOST = "http.host";
     public static final String HTTP_PORT = "http.port";
+    public static final String HTTP_ADVERTISED_ADDRESS = "http.advertised.address";
     public static final String TOP_N = "suggestions.top.n";
     public static final String POPULARITY_HALF_LIFE_HOURS = "popularity.half.life.hours";
     public static final String TOPIC_PARTITIONS = "topic.partitions";
@@ -65,6 +66,10 @@ public final class AppConfig extends AbstractConfig {
                             + " handles access control.")
             .define(HTTP_PORT, Type.INT, DEFAULT_HTTP_PORT, Range.between(0, 65535), Importance.MEDIUM,
                     "Port of the query API; 0 picks a free port.")
+            .define(HTTP_ADVERTISED_ADDRESS, Type.STRING, "", new AdvertisedAddressValidator(), Importance.MEDIUM,
+                    "host:port at which other instances reach this instance's query API, to forward a query for"
+                            + " a researcher whose list lives there; empty means http.host and the bound port."
+                            + " Set it when http.host is 0.0.0.0 (e.g. streams:7070 in docker compose).")
             .define(TOP_N, Type.INT, DEFAULT_TOP_N, Range.between(1, 100), Importance.MEDIUM,
                     "Suggestions kept and published per researcher.")
             .define(POPULARITY_HALF_LIFE_HOURS, Type.DOUBLE, 720.0, Range.between(0.001, 1.0e6), Importance.LOW,
@@ -127,6 +132,11 @@ public final class AppConfig extends AbstractConfig {
         return getInt(HTTP_PORT);
     }
 
+    /** Where other instances reach this one's query API; empty when it should be derived from the bound port. */
+    public String httpAdvertisedAddress() {
+        return getString(HTTP_ADVERTISED_ADDRESS);
+    }
+
     public int topN() {
         return getInt(TOP_N);
     }
@@ -155,6 +165,35 @@ public final class AppConfig extends AbstractConfig {
         p.put(StreamsConfig.DESERIALIZATION_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringDeserializationHandler.class);
         p.put(DeadLetteringDeserializationHandler.TOPIC_PREFIX_CONFIG, topicPrefix());
         return p;
+    }
+
+    /** Empty, or host:port with a port from 1 to 65535. */
+    static final class AdvertisedAddressValidator implements ConfigDef.Validator {
+        @Override
+        public void ensureValid(String name, Object value) {
+            String address = (String) value;
+            if (address == null || address.isEmpty()) {
+                return;
+            }
+            int colon = address.lastIndexOf(':');
+            boolean valid = colon > 0;
+            if (valid) {
+                try {
+                    int port = Integer.parseInt(address.substring(colon + 1));
+                    valid = port >= 1 && port <= 65535;
+                } catch (NumberFormatException e) {
+                    valid = false;
+                }
+            }
+            if (!valid) {
+                throw new org.apache.kafka.common.config.ConfigException(name, value, "must be host:port");
+            }
+        }
+
+        @Override
+        public String toString() {
+            return "empty or host:port";
+        }
     }
 
     /** A topic prefix must keep topic names legal: Kafka allows [a-zA-Z0-9._-] only. */

@@ -35,7 +35,7 @@ class QueryServerTest {
         Map<String, Suggestions> lists = Map.of("ada", list("ada", 3));
         server = QueryServer.start("127.0.0.1", 0, new SuggestionQueries() {
             @Override
-            public Optional<Suggestions> latest(String researcherId) {
+            public Optional<Suggestions> latest(String researcherId, boolean localOnly) {
                 if (!ready) {
                     throw new NotReadyException("store latest-suggestions is not ready (streams state REBALANCING)");
                 }
