@@ -6,11 +6,14 @@ import java.time.Duration;
 import java.util.HashMap;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.CountDownLatch;
 
 import org.congener.cli.demo.DemoRuntime;
 import org.congener.cli.demo.DemoSummary;
 import org.congener.cli.demo.EventReplay;
+import org.congener.cli.demo.LatencyStats;
 import org.congener.cli.demo.OutputCounter;
 import org.congener.cli.demo.ProgressLine;
 import org.congener.cli.demo.ReplayScenario;
@@ -55,6 +58,10 @@ public final class DemoCommand implements Callable<Integer> {
 
     @Option(names = "--limit", paramLabel = "N", description = "replay only the first N usage events (default: all)")
     Integer limit;
+
+    @Option(names = "--rate", paramLabel = "RECORDS_PER_SECOND", defaultValue = "0",
+            description = "replay at most this many records per second (default: as fast as possible)")
+    double rate;
 
     @Option(names = "--replay-only", description = "exit after the summary instead of serving (for scripts)")
     boolean replayOnly;
@@ -109,23 +116,36 @@ public final class DemoCommand implements Callable<Integer> {
         StreamsApp app = runtime.startStreamsApp(Duration.ofMinutes(2));
         out.println("streams app running (" + runtime.config().processingGuarantee() + ")");
 
-        long started = System.nanoTime();
-        EventReplay.Sent sent = replay.replayEvents(scenario,
-                new ProgressLine(out, "replaying events", EventReplay.timelineSize(scenario)));
+        int expected = scenario.usageEvents().size() + scenario.badUsageLines().size();
+        Map<String, Long> ackedAt = new ConcurrentHashMap<>();
         OutputCounter.Counts counts;
         String example;
+        Map<String, Long> seenAt;
+        long started = System.nanoTime();
         try (OutputCounter counter = new OutputCounter(runtime.bootstrapServers(), runtime.config().topicPrefix())) {
-            counts = counter.awaitTotal(sent.usageTopicRecords(), Duration.ofSeconds(timeoutSeconds),
-                    new ProgressLine(out, "processed", sent.usageTopicRecords()));
+            // count outputs while the replay runs, so that the time each list appears can be taken
+            CompletableFuture<OutputCounter.Counts> counting = CompletableFuture.supplyAsync(() ->
+                    counter.awaitTotal(expected, Duration.ofSeconds(timeoutSeconds), new ProgressLine(out, "processed", expected)));
+            try {
+                replay.replayEvents(scenario, new ProgressLine(out, "replaying events", EventReplay.timelineSize(scenario)),
+                        rate, ackedAt);
+            } catch (RuntimeException | InterruptedException e) {
+                counting.cancel(true);
+                throw e;
+            }
+            counts = counting.get();
             example = counter.firstResearcher();
+            seenAt = counter.seenAtNanos();
         }
+        EventReplay.Sent sent = new EventReplay.Sent(scenario.usageEvents().size(), scenario.inventoryEvents().size(),
+                scenario.badUsageLines().size());
         Duration took = Duration.ofNanos(System.nanoTime() - started);
         if (counts.total() < sent.usageTopicRecords()) {
             throw new IllegalStateException("the streams app processed " + counts.total() + " of "
                     + sent.usageTopicRecords() + " usage records within " + timeoutSeconds + " s; raise --timeout");
         }
         runtime.markReplayed();
-        new DemoSummary(sent, counts, app.deadLetterCount(), took).print(out);
+        new DemoSummary(sent, counts, app.deadLetterCount(), took, LatencyStats.of(ackedAt, seenAt), rate).print(out);
         printUrls(out, app, example);
     }
 

@@ -60,6 +60,7 @@ class DemoCommandTest {
         assertEquals(usage + bad, lists + letters, "every usage-topic record gave one list or one dead letter");
         assertTrue(letters >= bad, "every broken line is a dead letter");
         assertTrue(number(run.out(), "for ([\\d,]+) researchers") > 0);
+        assertEquals(lists, number(run.out(), "over ([\\d,]+) events"), "the list of every accepted event was seen");
         assertTrue(run.out().contains("/researchers/"), "prints a query URL");
         assertTrue(run.out().contains("safety data sheet"), "prints the caution");
         assertTrue(Files.exists(data.resolve("kafka")), "broker data kept under --data-dir");

@@ -5,6 +5,7 @@ import java.time.Instant;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Map;
 import java.util.Properties;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.concurrent.atomic.AtomicReference;
@@ -39,7 +40,8 @@ public final class EventReplay {
         }
     }
 
-    private record Entry(String topic, String key, byte[] value, long timestamp, int order) {
+    /** One record to send; {@code eventId} is set for good usage events only (latency is measured on them). */
+    private record Entry(String topic, String key, byte[] value, long timestamp, int order, String eventId) {
     }
 
     private final String bootstrapServers;
@@ -66,23 +68,46 @@ public final class EventReplay {
         }
     }
 
-    public Sent replayEvents(ReplayScenario scenario, ProgressLine progress) {
+    /**
+     * Sends the timeline; paces it at {@code ratePerSecond} records per second when that is positive.
+     *
+     * @param ackedAtNanos filled with {@code System.nanoTime()} at the broker's acknowledgement of each
+     *                     usage event, by event id
+     */
+    public Sent replayEvents(ReplayScenario scenario, ProgressLine progress, double ratePerSecond,
+                             Map<String, Long> ackedAtNanos) throws InterruptedException {
         List<Entry> timeline = timeline(scenario);
         AtomicLong acknowledged = new AtomicLong();
         AtomicReference<Exception> failure = new AtomicReference<>();
+        long start = System.nanoTime();
         try (KafkaProducer<String, byte[]> producer = producer()) {
-            for (Entry entry : timeline) {
+            for (int i = 0; i < timeline.size(); i++) {
                 if (failure.get() != null) {
                     break;
                 }
+                if (ratePerSecond > 0) {
+                    long due = start + (long) (i * 1e9 / ratePerSecond);
+                    long wait = due - System.nanoTime();
+                    if (wait > 0) {
+                        Thread.sleep(wait / 1_000_000, (int) (wait % 1_000_000));
+                    }
+                }
+                Entry entry = timeline.get(i);
                 producer.send(new ProducerRecord<>(entry.topic(), null, entry.timestamp(), entry.key(), entry.value()),
                         (metadata, exception) -> {
                             if (exception != null) {
                                 failure.compareAndSet(null, exception);
-                            } else {
-                                progress.update(acknowledged.incrementAndGet());
+                                return;
                             }
+                            if (entry.eventId() != null) {
+                                ackedAtNanos.put(entry.eventId(), System.nanoTime());
+                            }
+                            progress.update(acknowledged.incrementAndGet());
                         });
+                if (ratePerSecond > 0) {
+                    // paced: send now rather than wait for a fuller batch, or linger would add latency
+                    producer.flush();
+                }
             }
             producer.flush();
         }
@@ -110,20 +135,23 @@ public final class EventReplay {
             UsageEvent event = usage.get(i);
             long at = Instant.parse(event.occurredAt()).toEpochMilli();
             timeline.add(new Entry(usageTopic, event.researcherId(),
-                    topics.usageEvents().valueSerde().serializer().serialize(usageTopic, event), at, order++));
+                    topics.usageEvents().valueSerde().serializer().serialize(usageTopic, event), at, order++,
+                    event.eventId()));
             if (nextBad < bad.size() && (i + 1) % spacing == 0) {
-                timeline.add(new Entry(usageTopic, null, bad.get(nextBad++).getBytes(StandardCharsets.UTF_8), at, order++));
+                timeline.add(new Entry(usageTopic, null, bad.get(nextBad++).getBytes(StandardCharsets.UTF_8), at, order++,
+                        null));
             }
         }
         long lastAt = usage.isEmpty() ? System.currentTimeMillis()
                 : Instant.parse(usage.get(usage.size() - 1).occurredAt()).toEpochMilli();
         while (nextBad < bad.size()) {
-            timeline.add(new Entry(usageTopic, null, bad.get(nextBad++).getBytes(StandardCharsets.UTF_8), lastAt, order++));
+            timeline.add(new Entry(usageTopic, null, bad.get(nextBad++).getBytes(StandardCharsets.UTF_8), lastAt,
+                    order++, null));
         }
         for (InventoryEvent event : scenario.inventoryEvents()) {
             timeline.add(new Entry(inventoryTopic, event.compoundId(),
                     topics.inventoryEvents().valueSerde().serializer().serialize(inventoryTopic, event),
-                    Instant.parse(event.occurredAt()).toEpochMilli(), order++));
+                    Instant.parse(event.occurredAt()).toEpochMilli(), order++, null));
         }
         timeline.sort(Comparator.comparingLong(Entry::timestamp).thenComparingInt(Entry::order));
         return timeline;

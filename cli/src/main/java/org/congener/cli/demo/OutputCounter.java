@@ -2,6 +2,8 @@ package org.congener.cli.demo;
 
 import java.time.Duration;
 import java.util.ArrayList;
+import java.io.IOException;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
@@ -17,6 +19,8 @@ import org.apache.kafka.clients.consumer.KafkaConsumer;
 import org.apache.kafka.common.TopicPartition;
 import org.apache.kafka.common.serialization.ByteArrayDeserializer;
 import org.apache.kafka.common.serialization.StringDeserializer;
+import com.fasterxml.jackson.databind.JsonNode;
+import org.congener.schemas.Json;
 import org.congener.schemas.TopicName;
 
 /**
@@ -38,6 +42,7 @@ public final class OutputCounter implements AutoCloseable {
     private long suggestions;
     private long deadLetters;
     private final Set<String> researchers = new HashSet<>();
+    private final Map<String, Long> seenAtNanos = new HashMap<>();
     private final List<String> researcherOrder = new ArrayList<>();
 
     public OutputCounter(String bootstrapServers, String prefix) {
@@ -47,6 +52,7 @@ public final class OutputCounter implements AutoCloseable {
         p.put(ConsumerConfig.BOOTSTRAP_SERVERS_CONFIG, bootstrapServers);
         p.put(ConsumerConfig.ISOLATION_LEVEL_CONFIG, "read_committed");
         p.put(ConsumerConfig.MAX_POLL_RECORDS_CONFIG, 5000);
+        p.put(ConsumerConfig.FETCH_MAX_WAIT_MS_CONFIG, 50);
         this.consumer = new KafkaConsumer<>(p, new StringDeserializer(), new ByteArrayDeserializer());
         List<TopicPartition> partitions = new ArrayList<>();
         try (Admin admin = Admin.create(Map.of(AdminClientConfig.BOOTSTRAP_SERVERS_CONFIG, bootstrapServers))) {
@@ -70,6 +76,10 @@ public final class OutputCounter implements AutoCloseable {
             for (ConsumerRecord<String, byte[]> record : consumer.poll(Duration.ofMillis(200))) {
                 if (record.topic().equals(suggestionsTopic)) {
                     suggestions++;
+                    String cause = causeOf(record.value());
+                    if (cause != null) {
+                        seenAtNanos.putIfAbsent(cause, System.nanoTime());
+                    }
                     if (record.key() != null && researchers.add(record.key())) {
                         researcherOrder.add(record.key());
                     }
@@ -80,6 +90,20 @@ public final class OutputCounter implements AutoCloseable {
             progress.update(Math.min(expected, suggestions + deadLetters));
         }
         return new Counts(suggestions, deadLetters, Set.copyOf(researchers));
+    }
+
+    /** When ({@code System.nanoTime()}) the list caused by each event was first read, by event id. */
+    public Map<String, Long> seenAtNanos() {
+        return Map.copyOf(seenAtNanos);
+    }
+
+    private static String causeOf(byte[] value) {
+        try {
+            JsonNode cause = Json.mapper().readTree(value).get("causedByEventId");
+            return cause == null ? null : cause.asText();
+        } catch (IOException e) {
+            return null;
+        }
     }
 
     /** The researcher whose first list came out first, for an example URL; null when none. */

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 
+import org.apache.kafka.clients.consumer.ConsumerConfig;
 import org.apache.kafka.common.config.AbstractConfig;
 import org.apache.kafka.common.config.ConfigDef;
 import org.apache.kafka.common.config.ConfigDef.Importance;
@@ -162,6 +163,7 @@ public final class AppConfig extends AbstractConfig {
         p.put(StreamsConfig.PROCESSING_GUARANTEE_CONFIG, processingGuarantee());
         p.put(StreamsConfig.NUM_STREAM_THREADS_CONFIG, streamThreads());
         p.put(StreamsConfig.COMMIT_INTERVAL_MS_CONFIG, commitIntervalMs());
+        p.put(StreamsConfig.consumerPrefix(ConsumerConfig.FETCH_MAX_WAIT_MS_CONFIG), 50);
         p.put(StreamsConfig.DESERIALIZATION_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringDeserializationHandler.class);
         p.put(DeadLetteringDeserializationHandler.TOPIC_PREFIX_CONFIG, topicPrefix());
         return p;
