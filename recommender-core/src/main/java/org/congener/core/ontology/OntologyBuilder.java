@@ -1,6 +1,5 @@
 package org.congener.core.ontology;
 
-import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
@@ -11,7 +10,8 @@ import java.util.StringJoiner;
 /**
  * Collects terms and is-a edges, then checks and freezes them into an {@link Ontology}. Readers resolve ids
  * themselves (they know about alternative and obsolete ids) and hand over dense indices with the source line
- * of each edge, so that a cycle can be reported where it is written.
+ * of each edge, so that a cycle can be reported where it is written. A builder builds once: the ontology takes
+ * over its id table.
  */
 public final class OntologyBuilder {
     private final List<String> ids = new ArrayList<>();
@@ -22,6 +22,7 @@ public final class OntologyBuilder {
     private final GrowableIntArray edgeLine = new GrowableIntArray(1024);
     private int aliasCount;
     private int obsoleteTermsLeftOut;
+    private boolean built;
 
     /**
      * Adds a term and returns its dense id.
@@ -30,6 +31,7 @@ public final class OntologyBuilder {
      * @throws OntologyFormatException when the id is already a term or an alias
      */
     public int addTerm(String id, String name, int line) {
+        checkNotBuilt();
         if (id.equals(Ontology.VIRTUAL_ROOT_ID)) {
             throw new OntologyFormatException(line, id, "this id is reserved for the virtual root");
         }
@@ -55,6 +57,7 @@ public final class OntologyBuilder {
 
     /** Adds an is-a edge; duplicates are merged when the graph is built. */
     public void addEdge(int child, int parent, int line) {
+        checkNotBuilt();
         checkTerm(child);
         checkTerm(parent);
         if (child == parent) {
@@ -67,6 +70,7 @@ public final class OntologyBuilder {
 
     /** Lets {@link Ontology#termIndex(String)} resolve another id (an alt_id, an obsolete id) to a term. */
     public void addAlias(String alias, int term, int line) {
+        checkNotBuilt();
         checkTerm(term);
         Integer previous = indexById.putIfAbsent(alias, term);
         if (previous != null && previous != term) {
@@ -82,6 +86,12 @@ public final class OntologyBuilder {
         obsoleteTermsLeftOut = count;
     }
 
+    private void checkNotBuilt() {
+        if (built) {
+            throw new IllegalStateException("this builder has built its ontology already");
+        }
+    }
+
     private void checkTerm(int term) {
         if (term < 0 || term >= ids.size()) {
             throw new IllegalArgumentException("no term with index " + term);
@@ -94,6 +104,8 @@ public final class OntologyBuilder {
      * @throws OntologyFormatException naming the members of a cycle and the line of one of its edges
      */
     public Ontology build() {
+        checkNotBuilt();
+        built = true;
         int termCount = ids.size();
         long[] edges = distinctEdges();
         int[] parentCountReal = new int[termCount];
@@ -187,7 +199,7 @@ public final class OntologyBuilder {
             nameArray[termCount] = "virtual root";
         }
         int top = virtualRoot ? termCount : (roots.length == 1 ? roots[0] : -1);
-        return new Ontology(idArray, nameArray, new HashMap<>(indexById), termCount, edges.length, roots, top,
+        return new Ontology(idArray, nameArray, indexById, termCount, edges.length, roots, top,
                 parentOffsets, parentData, childOffsets, childData, ancestorStart, ancestorEnd,
                 ancestorData.toArray(), depth, obsoleteTermsLeftOut, aliasCount);
     }
@@ -217,21 +229,20 @@ public final class OntologyBuilder {
     private int[] topologicalOrder(int size, int[] parentOffsets, int[] childOffsets, int[] childData,
                                    int[] parentData) {
         int[] pending = new int[size];
-        ArrayDeque<Integer> ready = new ArrayDeque<>();
+        // order doubles as the queue: entries before head are done, entries from head to n are ready
+        int[] order = new int[size];
+        int n = 0;
         for (int t = 0; t < size; t++) {
             pending[t] = parentOffsets[t + 1] - parentOffsets[t];
             if (pending[t] == 0) {
-                ready.add(t);
+                order[n++] = t;
             }
         }
-        int[] order = new int[size];
-        int n = 0;
-        while (!ready.isEmpty()) {
-            int t = ready.poll();
-            order[n++] = t;
+        for (int head = 0; head < n; head++) {
+            int t = order[head];
             for (int k = childOffsets[t]; k < childOffsets[t + 1]; k++) {
                 if (--pending[childData[k]] == 0) {
-                    ready.add(childData[k]);
+                    order[n++] = childData[k];
                 }
             }
         }

@@ -5,6 +5,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Arrays;
+import java.util.Collections;
 import java.util.HashMap;
 import java.util.Locale;
 import java.util.Map;
@@ -20,15 +21,17 @@ import org.congener.core.ontology.OntologyFormatException;
  * hypernym ({@code @}) and instance hypernym ({@code @i}) pointers to nouns become is-a edges. Lines starting
  * with two spaces are the licence header.
  *
- * <p>The file is read into memory as bytes (15 MB for WordNet 3.0) and tokenised without regular expressions.
+ * <p>The file is read into memory (15 MB for WordNet 3.0) and tokenised without regular expressions; the glosses,
+ * most of the bytes, are jumped over to the end of the line.
  */
 public final class WordNetNounReader {
     /** Where Debian's {@code wordnet-base} package installs the noun database. */
     public static final Path DEBIAN_DATA_NOUN = Path.of("/usr/share/wordnet/data.noun");
 
     public WordNetNouns read(Path dataNoun) throws IOException {
-        byte[] bytes = Files.readAllBytes(dataNoun);
-        Cursor cursor = new Cursor(bytes);
+        // Latin-1 strings keep one byte per char, and String.indexOf finds line ends with vector instructions
+        String text = new String(Files.readAllBytes(dataNoun), StandardCharsets.ISO_8859_1);
+        Cursor cursor = new Cursor(text);
         GrowableIntArray offsets = new GrowableIntArray(1 << 17);
         GrowableIntArray edgeChild = new GrowableIntArray(1 << 17);
         GrowableIntArray edgeParentOffset = new GrowableIntArray(1 << 17);
@@ -44,30 +47,30 @@ public final class WordNetNounReader {
             }
             String offsetText = cursor.token();
             int offset = parseDecimal(offsetText, lineNumber);
-            cursor.token(); // lex_filenum
-            cursor.token(); // ss_type
-            int wordCount = Integer.parseInt(cursor.token(), 16);
+            cursor.skipToken(); // lex_filenum
+            cursor.skipToken(); // ss_type
+            int wordCount = cursor.hexNumber();
             String firstLemma = null;
             int term = builder.termCount();
             for (int w = 0; w < wordCount; w++) {
                 String lemma = cursor.token();
-                cursor.token(); // lex_id
+                cursor.skipToken(); // lex_id
                 if (firstLemma == null) {
                     firstLemma = lemma;
                 }
-                senses.computeIfAbsent(lemma.toLowerCase(Locale.ROOT), k -> new GrowableIntArray(2)).add(term);
+                senses.computeIfAbsent(lowerCase(lemma), k -> new GrowableIntArray(2)).add(term);
             }
             builder.addTerm(offsetText, firstLemma, lineNumber);
             offsets.add(offset);
-            int pointerCount = parseDecimal(cursor.token(), lineNumber);
+            int pointerCount = cursor.decimalNumber();
             for (int p = 0; p < pointerCount; p++) {
-                String symbol = cursor.token();
-                String target = cursor.token();
-                String pos = cursor.token();
-                cursor.token(); // source/target
-                if ((symbol.equals("@") || symbol.equals("@i")) && pos.equals("n")) {
+                boolean isA = cursor.isHypernymSymbol();
+                int target = cursor.decimalNumber();
+                boolean noun = cursor.isNounPos();
+                cursor.skipToken(); // source/target
+                if (isA && noun) {
                     edgeChild.add(term);
-                    edgeParentOffset.add(parseDecimal(target, lineNumber));
+                    edgeParentOffset.add(target);
                     edgeLine.add(lineNumber);
                 }
             }
@@ -89,7 +92,16 @@ public final class WordNetNounReader {
         }
         Map<String, int[]> sensesByLemma = new HashMap<>(senses.size() * 2);
         senses.forEach((lemma, list) -> sensesByLemma.put(lemma, list.toArray()));
-        return new WordNetNouns(builder.build(), Map.copyOf(sensesByLemma));
+        return new WordNetNouns(builder.build(), Collections.unmodifiableMap(sensesByLemma));
+    }
+
+    private static String lowerCase(String lemma) {
+        for (int i = 0; i < lemma.length(); i++) {
+            if (Character.isUpperCase(lemma.charAt(i))) {
+                return lemma.toLowerCase(Locale.ROOT);
+            }
+        }
+        return lemma;
     }
 
     private static int parseDecimal(String text, int line) {
@@ -100,39 +112,102 @@ public final class WordNetNounReader {
         }
     }
 
-    /** Space-separated tokens of a byte array, one line at a time. */
+    /** Space-separated tokens of a text, one line at a time. */
     private static final class Cursor {
-        private final byte[] bytes;
+        private final String text;
+        private final int length;
         private int position;
 
-        Cursor(byte[] bytes) {
-            this.bytes = bytes;
+        Cursor(String text) {
+            this.text = text;
+            this.length = text.length();
         }
 
         boolean hasMore() {
-            return position < bytes.length;
+            return position < length;
         }
 
-        byte peek() {
-            return bytes[position];
+        char peek() {
+            return text.charAt(position);
         }
 
         String token() {
-            while (position < bytes.length && bytes[position] == ' ') {
-                position++;
-            }
+            skipSpaces();
             int start = position;
-            while (position < bytes.length && bytes[position] != ' ' && bytes[position] != '\n') {
+            skipWord();
+            return text.substring(start, position);
+        }
+
+        void skipToken() {
+            skipSpaces();
+            skipWord();
+        }
+
+        /** Reads {@code @} or {@code @i} (true) or any other pointer symbol (false). */
+        boolean isHypernymSymbol() {
+            skipSpaces();
+            int start = position;
+            skipWord();
+            int size = position - start;
+            return text.charAt(start) == '@' && (size == 1 || (size == 2 && text.charAt(start + 1) == 'i'));
+        }
+
+        boolean isNounPos() {
+            skipSpaces();
+            int start = position;
+            skipWord();
+            return position - start == 1 && text.charAt(start) == 'n';
+        }
+
+        int decimalNumber() {
+            return number(10);
+        }
+
+        int hexNumber() {
+            return number(16);
+        }
+
+        private int number(int radix) {
+            skipSpaces();
+            int value = 0;
+            int start = position;
+            while (position < length) {
+                char c = text.charAt(position);
+                if (c == ' ' || c == '\n') {
+                    break;
+                }
+                int digit = Character.digit(c, radix);
+                if (digit < 0) {
+                    throw new OntologyFormatException(0, null, "expected a number at character " + start);
+                }
+                value = value * radix + digit;
                 position++;
             }
-            return new String(bytes, start, position - start, StandardCharsets.ISO_8859_1);
+            if (position == start) {
+                throw new OntologyFormatException(0, null, "expected a number at character " + start);
+            }
+            return value;
+        }
+
+        private void skipSpaces() {
+            while (position < length && text.charAt(position) == ' ') {
+                position++;
+            }
+        }
+
+        private void skipWord() {
+            while (position < length) {
+                char c = text.charAt(position);
+                if (c == ' ' || c == '\n') {
+                    return;
+                }
+                position++;
+            }
         }
 
         void skipLine() {
-            while (position < bytes.length && bytes[position] != '\n') {
-                position++;
-            }
-            position++;
+            int end = text.indexOf('\n', position);
+            position = end < 0 ? length : end + 1;
         }
     }
 }

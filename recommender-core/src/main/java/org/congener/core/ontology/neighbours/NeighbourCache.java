@@ -52,7 +52,7 @@ public final class NeighbourCache {
     /**
      * Computes the cache.
      *
-     * @param termsByCompound compound id to the dense ids of its ontology terms (not modified); a compound
+     * @param termsByCompound compound id to the dense ids of its ontology terms, taken as a set (not modified); a compound
      *                        without terms gets no neighbours and is nobody's neighbour
      * @param similarity      the term measure and how it aggregates over several terms
      */
