@@ -58,7 +58,7 @@ public final class NeighbourCache {
      */
     public static NeighbourCache build(Map<String, int[]> termsByCompound, CompoundSimilarity similarity,
                                        NeighbourCacheSettings settings) {
-        return new NeighbourSearch(termsByCompound, similarity, settings).run();
+        return NeighbourSearch.create(termsByCompound, similarity, settings).run();
     }
 
     /** The neighbours of a compound, most similar first; empty for a compound that is not in the catalogue. */
@@ -114,7 +114,10 @@ public final class NeighbourCache {
         return aggregation;
     }
 
-    /** How many compound pairs were scored while building (an all-pairs scan would score n·(n−1)). */
+    /**
+     * How much work the build did: for {@link Aggregation#MAX} the (compound, term) entries visited, each O(1);
+     * for best-match average the compound pairs scored in full. An all-pairs scan scores n·(n−1) compound pairs.
+     */
     public long pairsScored() {
         return pairsScored;
     }

@@ -11,37 +11,40 @@ import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 
 import org.congener.core.ontology.Ontology;
+import org.congener.core.ontology.similarity.Aggregation;
 import org.congener.core.ontology.similarity.CompoundSimilarity;
 import org.congener.core.ontology.similarity.SimilarityMeasure;
 
 /**
- * The exact top-K search behind {@link NeighbourCache}.
+ * What the exact top-K searches share: the catalogue in compound id order, the result arrays, the threads.
  *
- * <p>An inverted index lists, for each term m, the compounds having m among the ancestors of one of their
- * terms. For a query compound Q the search takes the ancestors m of Q's terms in falling order of the bound
- * {@link SimilarityMeasure#upperBound(int, int)} (for Lin: 2·IC(m)/(IC(a)+IC(m))) and scores every compound
- * listed under m that it has not scored yet. A compound B not yet scored shares with each term a of Q a MICA
- * that has not been taken yet, so sim(Q, B) is at most the next bound, for the maximum and for the
- * best-match average (which never exceeds the maximum). The search therefore stops, exactly, when the next
- * bound falls below the K-th best similarity found.
+ * <p>Both searches rest on one bound. Take the ancestors m of the query's terms a in falling order of
+ * {@link SimilarityMeasure#upperBound(int, int)} (for Lin 2·IC(m)/(IC(a)+IC(m)); it rises with IC(m)). A pair
+ * of terms (a, b) whose MICA has not been taken yet has a similarity no higher than the next bound, and so has a
+ * compound all of whose term pairs are in that state, for the maximum and for the best-match average (never
+ * above the maximum). The search stops, exactly, when the next bound falls below the K-th best similarity found.
  *
- * <p>Memory: the index (one int per compound and ancestor of its terms), the results (K ints and doubles per
- * compound) and, per thread, two stamp arrays; never a matrix of pairs.
+ * <p>Memory: an inverted index (ints per catalogue term and ancestor), the results (K ints and doubles per
+ * compound) and per thread a few arrays over compounds and terms; never a matrix of pairs.
  */
-final class NeighbourSearch {
+abstract class NeighbourSearch {
     private static final int BLOCK = 16;
 
-    private final String[] compoundIds;
-    private final int[][] terms;
-    private final CompoundSimilarity similarity;
-    private final SimilarityMeasure measure;
-    private final Ontology ontology;
-    private final NeighbourCacheSettings settings;
-    private final int[] postingOffsets;
-    private final int[] postings;
-    private final int[] neighbourIndex;
-    private final double[] neighbourSimilarity;
-    private final int[] neighbourCount;
+    final String[] compoundIds;
+    final int[][] terms;
+    final CompoundSimilarity similarity;
+    final SimilarityMeasure measure;
+    final Ontology ontology;
+    final NeighbourCacheSettings settings;
+    final int[] neighbourIndex;
+    final double[] neighbourSimilarity;
+    final int[] neighbourCount;
+
+    /** One thread's search, with scratch space reused across queries. */
+    interface Worker {
+        /** Fills the result slots of compound q and returns how many pairs it examined. */
+        long search(int q);
+    }
 
     NeighbourSearch(Map<String, int[]> termsByCompound, CompoundSimilarity similarity,
                     NeighbourCacheSettings settings) {
@@ -63,47 +66,21 @@ final class NeighbourSearch {
             }
             terms[c] = Arrays.stream(raw).sorted().distinct().toArray();
         }
-        this.postingOffsets = new int[ontology.size() + 1];
-        this.postings = buildPostings();
         int k = settings.k();
         this.neighbourIndex = new int[Math.multiplyExact(n, k)];
         this.neighbourSimilarity = new double[n * k];
         this.neighbourCount = new int[n];
     }
 
-    /** Two passes over the compounds' ancestor unions: count per term, then fill. */
-    private int[] buildPostings() {
-        int size = ontology.size();
-        int[] stamp = new int[size];
-        Arrays.fill(stamp, -1);
-        int[] counts = new int[size];
-        for (int c = 0; c < terms.length; c++) {
-            forEachAncestorOnce(c, stamp, m -> counts[m]++);
-        }
-        for (int m = 0; m < size; m++) {
-            postingOffsets[m + 1] = postingOffsets[m] + counts[m];
-        }
-        int[] data = new int[postingOffsets[size]];
-        int[] fill = Arrays.copyOf(postingOffsets, size);
-        Arrays.fill(stamp, -1);
-        for (int c = 0; c < terms.length; c++) {
-            int compound = c;
-            forEachAncestorOnce(c, stamp, m -> data[fill[m]++] = compound);
-        }
-        return data;
+    /** The search that suits the aggregation. */
+    static NeighbourSearch create(Map<String, int[]> termsByCompound, CompoundSimilarity similarity,
+                                  NeighbourCacheSettings settings) {
+        return similarity.aggregation() == Aggregation.MAX
+                ? new BestPairSearch(termsByCompound, similarity, settings)
+                : new RescoringSearch(termsByCompound, similarity, settings);
     }
 
-    private void forEachAncestorOnce(int c, int[] stamp, java.util.function.IntConsumer action) {
-        for (int a : terms[c]) {
-            for (int k = ontology.ancestorsFrom(a); k < ontology.ancestorsTo(a); k++) {
-                int m = ontology.ancestorAt(k);
-                if (stamp[m] != c) {
-                    stamp[m] = c;
-                    action.accept(m);
-                }
-            }
-        }
-    }
+    abstract Worker newWorker();
 
     NeighbourCache run() {
         AtomicInteger next = new AtomicInteger();
@@ -135,96 +112,36 @@ final class NeighbourSearch {
     }
 
     private long work(AtomicInteger next) {
-        Query query = new Query();
+        Worker worker = newWorker();
         long scored = 0;
         int start;
         while ((start = next.getAndAdd(BLOCK)) < compoundIds.length) {
             int end = Math.min(compoundIds.length, start + BLOCK);
             for (int c = start; c < end; c++) {
-                scored += query.search(c);
+                scored += worker.search(c);
             }
         }
         return scored;
     }
 
-    /** One thread's scratch space, reused across queries. */
-    private final class Query {
-        private final int[] scoredStamp = new int[compoundIds.length];
-        private final int[] ancestorSlot = new int[ontology.size()];
-        private final int[] ancestorStamp = new int[ontology.size()];
-        private final TopK top = new TopK(settings.k());
-        private long[] order = new long[64];
-        private int[] ancestors = new int[64];
-        private double[] bounds = new double[64];
-
-        Query() {
-            Arrays.fill(scoredStamp, -1);
-            Arrays.fill(ancestorStamp, -1);
+    /**
+     * Packs (bound, position) into longs that sort by rising bound. The bound is rounded up to a float, so the
+     * key never understates it and stopping on the key stays exact.
+     */
+    static long sortKey(double bound, int position) {
+        float rounded = (float) bound;
+        if (rounded < bound) {
+            rounded = Math.nextUp(rounded);
         }
+        // non-negative floats sort like their bit patterns
+        return ((long) Float.floatToIntBits(rounded) << 32) | position;
+    }
 
-        long search(int q) {
-            int candidates = collectAncestors(q);
-            top.clear();
-            long scored = 0;
-            for (int i = candidates - 1; i >= 0; i--) {
-                // the high half of the key is the bound rounded up to a float, never below the true bound
-                float bound = Float.intBitsToFloat((int) (order[i] >>> 32));
-                if (bound <= 0 || (top.isFull() && bound < top.worstScore())) {
-                    break;
-                }
-                int m = (int) order[i];
-                for (int p = postingOffsets[m]; p < postingOffsets[m + 1]; p++) {
-                    int c = postings[p];
-                    if (c == q || scoredStamp[c] == q) {
-                        continue;
-                    }
-                    scoredStamp[c] = q;
-                    scored++;
-                    double s = similarity.similarity(terms[q], terms[c]);
-                    if (s > 0) {
-                        top.offer(s, c);
-                    }
-                }
-            }
-            int count = top.drainInto(neighbourIndex, neighbourSimilarity, q * settings.k());
-            neighbourCount[q] = count;
-            return scored;
-        }
+    static float boundOf(long key) {
+        return Float.intBitsToFloat((int) (key >>> 32));
+    }
 
-        /** The distinct ancestors of Q's terms with their best bound, sorted by rising (float) bound. */
-        private int collectAncestors(int q) {
-            int n = 0;
-            for (int a : terms[q]) {
-                for (int k = ontology.ancestorsFrom(a); k < ontology.ancestorsTo(a); k++) {
-                    int m = ontology.ancestorAt(k);
-                    double bound = measure.upperBound(a, m);
-                    if (ancestorStamp[m] == q) {
-                        int slot = ancestorSlot[m];
-                        bounds[slot] = Math.max(bounds[slot], bound);
-                        continue;
-                    }
-                    if (n == ancestors.length) {
-                        ancestors = Arrays.copyOf(ancestors, n * 2);
-                        bounds = Arrays.copyOf(bounds, n * 2);
-                        order = Arrays.copyOf(order, n * 2);
-                    }
-                    ancestorStamp[m] = q;
-                    ancestorSlot[m] = n;
-                    ancestors[n] = m;
-                    bounds[n] = bound;
-                    n++;
-                }
-            }
-            for (int i = 0; i < n; i++) {
-                float rounded = (float) bounds[i];
-                if (rounded < bounds[i]) {
-                    rounded = Math.nextUp(rounded);
-                }
-                // non-negative floats sort like their bit patterns
-                order[i] = ((long) Float.floatToIntBits(rounded) << 32) | ancestors[i];
-            }
-            Arrays.sort(order, 0, n);
-            return n;
-        }
+    static int positionOf(long key) {
+        return (int) key;
     }
 }

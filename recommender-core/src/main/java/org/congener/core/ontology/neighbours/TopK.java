@@ -1,23 +1,26 @@
 package org.congener.core.ontology.neighbours;
 
+import java.util.Arrays;
+
 /**
- * The K best (score, index) pairs seen so far, in a binary min-heap whose root is the worst kept pair.
- * Higher score is better; on equal scores the lower index is better, which makes results deterministic.
+ * The K best (score, index) pairs seen so far, in a binary min-heap whose root is the worst kept pair, with the
+ * heap position of each index so that a kept pair's score can rise in place. Higher score is better; on equal
+ * scores the lower index is better, which makes results deterministic.
  */
 final class TopK {
     private final int capacity;
     private final double[] scores;
     private final int[] indices;
+    private final int[] positionOf;
     private int size;
 
-    TopK(int capacity) {
+    /** @param universe indices are in {@code 0 .. universe-1} */
+    TopK(int capacity, int universe) {
         this.capacity = capacity;
         this.scores = new double[capacity];
         this.indices = new int[capacity];
-    }
-
-    void clear() {
-        size = 0;
+        this.positionOf = new int[universe];
+        Arrays.fill(positionOf, -1);
     }
 
     boolean isFull() {
@@ -29,15 +32,25 @@ final class TopK {
         return scores[0];
     }
 
-    void offer(double score, int index) {
-        if (size < capacity) {
+    /**
+     * Offers a score for an index; the heap keeps, per index, the highest score offered. This stays exact when an
+     * index is dropped: it is dropped only as the worst kept pair, the worst kept score never falls afterwards
+     * (the heap stays full), so a later lower score of that index cannot get back in.
+     */
+    void offerOrRaise(double score, int index) {
+        int at = positionOf[index];
+        if (at >= 0) {
+            if (score > scores[at]) {
+                scores[at] = score;
+                siftDown(at);
+            }
+        } else if (size < capacity) {
             int i = size++;
-            scores[i] = score;
-            indices[i] = index;
+            place(i, score, index);
             siftUp(i);
         } else if (worse(scores[0], indices[0], score, index)) {
-            scores[0] = score;
-            indices[0] = index;
+            positionOf[indices[0]] = -1;
+            place(0, score, index);
             siftDown(0);
         }
     }
@@ -51,10 +64,10 @@ final class TopK {
         for (int r = count - 1; r >= 0; r--) {
             indexOut[offset + r] = indices[0];
             scoreOut[offset + r] = scores[0];
+            positionOf[indices[0]] = -1;
             size--;
             if (size > 0) {
-                scores[0] = scores[size];
-                indices[0] = indices[size];
+                place(0, scores[size], indices[size]);
                 siftDown(0);
             }
         }
@@ -64,6 +77,12 @@ final class TopK {
     /** True when pair (s1, i1) ranks below pair (s2, i2). */
     private static boolean worse(double s1, int i1, double s2, int i2) {
         return s1 < s2 || (s1 == s2 && i1 > i2);
+    }
+
+    private void place(int at, double score, int index) {
+        scores[at] = score;
+        indices[at] = index;
+        positionOf[index] = at;
     }
 
     private void siftUp(int i) {
@@ -98,10 +117,8 @@ final class TopK {
 
     private void swap(int a, int b) {
         double s = scores[a];
-        scores[a] = scores[b];
-        scores[b] = s;
         int x = indices[a];
-        indices[a] = indices[b];
-        indices[b] = x;
+        place(a, scores[b], indices[b]);
+        place(b, s, x);
     }
 }

@@ -31,7 +31,19 @@ public final class JiangConrathSimilarity extends IcMeasure {
         if (max == 0) {
             return 1.0;
         }
-        double distance = ic.of(a) + ic.of(b) - 2.0 * ic.of(mostInformativeCommonAncestor(a, b));
+        return similarityThrough(a, b, mostInformativeCommonAncestor(a, b));
+    }
+
+    @Override
+    public double similarityThrough(int a, int b, int commonAncestor) {
+        if (a == b) {
+            return 1.0;
+        }
+        double max = ic.max();
+        if (max == 0) {
+            return 1.0;
+        }
+        double distance = ic.of(a) + ic.of(b) - 2.0 * ic.of(commonAncestor);
         return clamp(1.0 - distance / (2.0 * max));
     }
 

@@ -21,11 +21,16 @@ public final class LinSimilarity extends IcMeasure {
 
     @Override
     public double similarity(int a, int b) {
+        return similarityThrough(a, b, mostInformativeCommonAncestor(a, b));
+    }
+
+    @Override
+    public double similarityThrough(int a, int b, int commonAncestor) {
         if (a == b) {
             return 1.0;
         }
         double denominator = ic.of(a) + ic.of(b);
-        return denominator == 0 ? 0.0 : 2.0 * ic.of(mostInformativeCommonAncestor(a, b)) / denominator;
+        return denominator == 0 ? 0.0 : 2.0 * ic.of(commonAncestor) / denominator;
     }
 
     /** IC(b) ≥ IC(m) for every b below m, so sim(a, b) ≤ 2·IC(m) / (IC(a) + IC(m)). */

@@ -26,6 +26,11 @@ public final class ResnikSimilarity extends IcMeasure {
         return max == 0 ? 0.0 : ic.of(mostInformativeCommonAncestor(a, b)) / max;
     }
 
+    @Override
+    public double similarityThrough(int a, int b, int commonAncestor) {
+        return upperBound(a, commonAncestor);
+    }
+
     /** Resnik's value depends on the MICA alone. */
     @Override
     public double upperBound(int a, int commonAncestor) {

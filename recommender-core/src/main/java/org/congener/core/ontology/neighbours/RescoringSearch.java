@@ -1,0 +1,139 @@
+package org.congener.core.ontology.neighbours;
+
+import java.util.Arrays;
+import java.util.Map;
+
+import org.congener.core.ontology.similarity.CompoundSimilarity;
+
+/**
+ * The search for aggregations other than the maximum (best-match average): the index lists, for each term m,
+ * the compounds having m among the ancestors of one of their terms; each compound met for the first time is
+ * scored in full by {@link CompoundSimilarity}. Ancestors are taken once, with the best bound over the query's
+ * terms.
+ */
+final class RescoringSearch extends NeighbourSearch {
+    private final int[] postingOffsets;
+    private final int[] postings;
+
+    RescoringSearch(Map<String, int[]> termsByCompound, CompoundSimilarity similarity,
+                    NeighbourCacheSettings settings) {
+        super(termsByCompound, similarity, settings);
+        int size = ontology.size();
+        postingOffsets = new int[size + 1];
+        int[] stamp = new int[size];
+        Arrays.fill(stamp, -1);
+        for (int c = 0; c < terms.length; c++) {
+            for (int m : ancestorsOnce(c, stamp)) {
+                postingOffsets[m + 1]++;
+            }
+        }
+        for (int m = 0; m < size; m++) {
+            postingOffsets[m + 1] += postingOffsets[m];
+        }
+        postings = new int[postingOffsets[size]];
+        int[] fill = Arrays.copyOf(postingOffsets, size);
+        Arrays.fill(stamp, -1);
+        for (int c = 0; c < terms.length; c++) {
+            for (int m : ancestorsOnce(c, stamp)) {
+                postings[fill[m]++] = c;
+            }
+        }
+    }
+
+    /** The union of the ancestor sets of compound c's terms. */
+    private int[] ancestorsOnce(int c, int[] stamp) {
+        int total = 0;
+        for (int a : terms[c]) {
+            total += ontology.ancestorCount(a);
+        }
+        int[] union = new int[total];
+        int n = 0;
+        for (int a : terms[c]) {
+            for (int k = ontology.ancestorsFrom(a); k < ontology.ancestorsTo(a); k++) {
+                int m = ontology.ancestorAt(k);
+                if (stamp[m] != c) {
+                    stamp[m] = c;
+                    union[n++] = m;
+                }
+            }
+        }
+        return Arrays.copyOf(union, n);
+    }
+
+    @Override
+    Worker newWorker() {
+        return new Worker() {
+            private final int[] scoredStamp = filled(compoundIds.length);
+            private final int[] ancestorSlot = new int[ontology.size()];
+            private final int[] ancestorStamp = filled(ontology.size());
+            private final TopK top = new TopK(settings.k(), compoundIds.length);
+            private long[] order = new long[64];
+            private int[] ancestors = new int[64];
+            private double[] bounds = new double[64];
+
+            @Override
+            public long search(int q) {
+                int entries = collectAncestors(q);
+                long scored = 0;
+                for (int i = entries - 1; i >= 0; i--) {
+                    float bound = boundOf(order[i]);
+                    if (bound <= 0 || (top.isFull() && bound < top.worstScore())) {
+                        break;
+                    }
+                    int m = ancestors[positionOf(order[i])];
+                    for (int p = postingOffsets[m]; p < postingOffsets[m + 1]; p++) {
+                        int c = postings[p];
+                        if (c == q || scoredStamp[c] == q) {
+                            continue;
+                        }
+                        scoredStamp[c] = q;
+                        scored++;
+                        double s = similarity.similarity(terms[q], terms[c]);
+                        if (s > 0) {
+                            top.offerOrRaise(s, c);
+                        }
+                    }
+                }
+                neighbourCount[q] = top.drainInto(neighbourIndex, neighbourSimilarity, q * settings.k());
+                return scored;
+            }
+
+            /** The distinct ancestors of the query's terms, each with its best bound. */
+            private int collectAncestors(int q) {
+                int n = 0;
+                for (int a : terms[q]) {
+                    for (int k = ontology.ancestorsFrom(a); k < ontology.ancestorsTo(a); k++) {
+                        int m = ontology.ancestorAt(k);
+                        double bound = measure.upperBound(a, m);
+                        if (ancestorStamp[m] == q) {
+                            int slot = ancestorSlot[m];
+                            bounds[slot] = Math.max(bounds[slot], bound);
+                            continue;
+                        }
+                        if (n == ancestors.length) {
+                            ancestors = Arrays.copyOf(ancestors, n * 2);
+                            bounds = Arrays.copyOf(bounds, n * 2);
+                            order = Arrays.copyOf(order, n * 2);
+                        }
+                        ancestorStamp[m] = q;
+                        ancestorSlot[m] = n;
+                        ancestors[n] = m;
+                        bounds[n] = bound;
+                        n++;
+                    }
+                }
+                for (int i = 0; i < n; i++) {
+                    order[i] = sortKey(bounds[i], i);
+                }
+                Arrays.sort(order, 0, n);
+                return n;
+            }
+        };
+    }
+
+    private static int[] filled(int length) {
+        int[] array = new int[length];
+        Arrays.fill(array, -1);
+        return array;
+    }
+}
