@@ -5,10 +5,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Arrays;
-import java.util.Collections;
-import java.util.HashMap;
 import java.util.Locale;
-import java.util.Map;
 
 import org.congener.core.ontology.GrowableIntArray;
 import org.congener.core.ontology.Ontology;
@@ -37,7 +34,8 @@ public final class WordNetNounReader {
         GrowableIntArray edgeParentOffset = new GrowableIntArray(1 << 17);
         GrowableIntArray edgeLine = new GrowableIntArray(1 << 17);
         OntologyBuilder builder = new OntologyBuilder();
-        Map<String, GrowableIntArray> senses = new HashMap<>(1 << 18);
+        java.util.ArrayList<String> lemmas = new java.util.ArrayList<>(1 << 18);
+        GrowableIntArray lemmaTerms = new GrowableIntArray(1 << 18);
         int lineNumber = 0;
         while (cursor.hasMore()) {
             lineNumber++;
@@ -58,7 +56,8 @@ public final class WordNetNounReader {
                 if (firstLemma == null) {
                     firstLemma = lemma;
                 }
-                senses.computeIfAbsent(lowerCase(lemma), k -> new GrowableIntArray(2)).add(term);
+                lemmas.add(lowerCase(lemma));
+                lemmaTerms.add(term);
             }
             builder.addTerm(offsetText, firstLemma, lineNumber);
             offsets.add(offset);
@@ -90,9 +89,7 @@ public final class WordNetNounReader {
             }
             builder.addEdge(edgeChild.get(e), parent, edgeLine.get(e));
         }
-        Map<String, int[]> sensesByLemma = new HashMap<>(senses.size() * 2);
-        senses.forEach((lemma, list) -> sensesByLemma.put(lemma, list.toArray()));
-        return new WordNetNouns(builder.build(), Collections.unmodifiableMap(sensesByLemma));
+        return new WordNetNouns(builder.build(), lemmas.toArray(new String[0]), lemmaTerms.toArray());
     }
 
     private static String lowerCase(String lemma) {
