@@ -16,13 +16,22 @@ import java.util.StringJoiner;
 public final class OntologyBuilder {
     private final List<String> ids = new ArrayList<>();
     private final List<String> names = new ArrayList<>();
-    private final Map<String, Integer> indexById = new HashMap<>();
+    private final Map<String, Integer> indexById;
     private final GrowableIntArray edgeChild = new GrowableIntArray(1024);
     private final GrowableIntArray edgeParent = new GrowableIntArray(1024);
     private final GrowableIntArray edgeLine = new GrowableIntArray(1024);
     private int aliasCount;
     private int obsoleteTermsLeftOut;
     private boolean built;
+
+    public OntologyBuilder() {
+        this(1024);
+    }
+
+    /** @param expectedTerms how many terms to make room for (a hint; more are accepted) */
+    public OntologyBuilder(int expectedTerms) {
+        indexById = new HashMap<>(Math.max(16, expectedTerms * 4 / 3 + 1));
+    }
 
     /**
      * Adds a term and returns its dense id.
@@ -154,7 +163,8 @@ public final class OntologyBuilder {
         int[] depth = new int[size];
         int[] ancestorStart = new int[size];
         int[] ancestorEnd = new int[size];
-        GrowableIntArray ancestorData = new GrowableIntArray(size * 8);
+        int[] ancestorData = new int[Math.max(16, size * 8)];
+        int ancestorSize = 0;
         int[] scratch = new int[16];
         for (int term : order) {
             int from = parentOffsets[term];
@@ -176,20 +186,23 @@ public final class OntologyBuilder {
             scratch[n++] = term;
             for (int k = from; k < to; k++) {
                 int p = parentData[k];
-                for (int a = ancestorStart[p]; a < ancestorEnd[p]; a++) {
-                    scratch[n++] = ancestorData.get(a);
-                }
+                int count = ancestorEnd[p] - ancestorStart[p];
+                System.arraycopy(ancestorData, ancestorStart[p], scratch, n, count);
+                n += count;
             }
             Arrays.sort(scratch, 0, n);
-            ancestorStart[term] = ancestorData.size();
+            if (ancestorData.length - ancestorSize < n) {
+                ancestorData = Arrays.copyOf(ancestorData, Math.max(ancestorData.length * 2, ancestorSize + n));
+            }
+            ancestorStart[term] = ancestorSize;
             int last = -1;
             for (int i = 0; i < n; i++) {
                 if (scratch[i] != last) {
-                    ancestorData.add(scratch[i]);
+                    ancestorData[ancestorSize++] = scratch[i];
                     last = scratch[i];
                 }
             }
-            ancestorEnd[term] = ancestorData.size();
+            ancestorEnd[term] = ancestorSize;
         }
 
         String[] idArray = ids.toArray(new String[size]);
@@ -201,7 +214,7 @@ public final class OntologyBuilder {
         int top = virtualRoot ? termCount : (roots.length == 1 ? roots[0] : -1);
         return new Ontology(idArray, nameArray, indexById, termCount, edges.length, roots, top,
                 parentOffsets, parentData, childOffsets, childData, ancestorStart, ancestorEnd,
-                ancestorData.toArray(), depth, obsoleteTermsLeftOut, aliasCount);
+                Arrays.copyOf(ancestorData, ancestorSize), depth, obsoleteTermsLeftOut, aliasCount);
     }
 
     private long[] distinctEdges() {

@@ -26,14 +26,12 @@ public final class WordNetNounReader {
     public static final Path DEBIAN_DATA_NOUN = Path.of("/usr/share/wordnet/data.noun");
 
     public WordNetNouns read(Path dataNoun) throws IOException {
-        // Latin-1 strings keep one byte per char, and String.indexOf finds line ends with vector instructions
-        String text = new String(Files.readAllBytes(dataNoun), StandardCharsets.ISO_8859_1);
-        Cursor cursor = new Cursor(text);
+        Cursor cursor = new Cursor(Files.readAllBytes(dataNoun));
         GrowableIntArray offsets = new GrowableIntArray(1 << 17);
         GrowableIntArray edgeChild = new GrowableIntArray(1 << 17);
         GrowableIntArray edgeParentOffset = new GrowableIntArray(1 << 17);
         GrowableIntArray edgeLine = new GrowableIntArray(1 << 17);
-        OntologyBuilder builder = new OntologyBuilder();
+        OntologyBuilder builder = new OntologyBuilder(1 << 17);
         java.util.ArrayList<String> lemmas = new java.util.ArrayList<>(1 << 18);
         GrowableIntArray lemmaTerms = new GrowableIntArray(1 << 18);
         int lineNumber = 0;
@@ -43,8 +41,9 @@ public final class WordNetNounReader {
                 cursor.skipLine();
                 continue;
             }
-            String offsetText = cursor.token();
-            int offset = parseDecimal(offsetText, lineNumber);
+            int offsetStart = cursor.position();
+            int offset = cursor.decimalNumber();
+            String offsetText = cursor.textFrom(offsetStart);
             cursor.skipToken(); // lex_filenum
             cursor.skipToken(); // ss_type
             int wordCount = cursor.hexNumber();
@@ -56,7 +55,7 @@ public final class WordNetNounReader {
                 if (firstLemma == null) {
                     firstLemma = lemma;
                 }
-                lemmas.add(lowerCase(lemma));
+                lemmas.add(lemma.toLowerCase(Locale.ROOT));
                 lemmaTerms.add(term);
             }
             builder.addTerm(offsetText, firstLemma, lineNumber);
@@ -92,47 +91,38 @@ public final class WordNetNounReader {
         return new WordNetNouns(builder.build(), lemmas.toArray(new String[0]), lemmaTerms.toArray());
     }
 
-    private static String lowerCase(String lemma) {
-        for (int i = 0; i < lemma.length(); i++) {
-            if (Character.isUpperCase(lemma.charAt(i))) {
-                return lemma.toLowerCase(Locale.ROOT);
-            }
-        }
-        return lemma;
-    }
-
-    private static int parseDecimal(String text, int line) {
-        try {
-            return Integer.parseInt(text);
-        } catch (NumberFormatException e) {
-            throw new OntologyFormatException(line, null, "expected a decimal number, found '" + text + "'");
-        }
-    }
-
-    /** Space-separated tokens of a text, one line at a time. */
+    /** Space-separated tokens of the file's bytes, one line at a time. */
     private static final class Cursor {
-        private final String text;
+        private final byte[] bytes;
         private final int length;
         private int position;
 
-        Cursor(String text) {
-            this.text = text;
-            this.length = text.length();
+        Cursor(byte[] bytes) {
+            this.bytes = bytes;
+            this.length = bytes.length;
         }
 
         boolean hasMore() {
             return position < length;
         }
 
-        char peek() {
-            return text.charAt(position);
+        byte peek() {
+            return bytes[position];
+        }
+
+        int position() {
+            return position;
+        }
+
+        String textFrom(int start) {
+            return new String(bytes, start, position - start, StandardCharsets.ISO_8859_1);
         }
 
         String token() {
             skipSpaces();
             int start = position;
             skipWord();
-            return text.substring(start, position);
+            return textFrom(start);
         }
 
         void skipToken() {
@@ -146,65 +136,65 @@ public final class WordNetNounReader {
             int start = position;
             skipWord();
             int size = position - start;
-            return text.charAt(start) == '@' && (size == 1 || (size == 2 && text.charAt(start + 1) == 'i'));
+            return bytes[start] == '@' && (size == 1 || (size == 2 && bytes[start + 1] == 'i'));
         }
 
         boolean isNounPos() {
             skipSpaces();
             int start = position;
             skipWord();
-            return position - start == 1 && text.charAt(start) == 'n';
+            return position - start == 1 && bytes[start] == 'n';
         }
 
         int decimalNumber() {
-            return number(10);
+            skipSpaces();
+            int start = position;
+            int value = 0;
+            while (position < length && bytes[position] >= '0' && bytes[position] <= '9') {
+                value = value * 10 + (bytes[position++] - '0');
+            }
+            return checkedEnd(start, value);
         }
 
         int hexNumber() {
-            return number(16);
-        }
-
-        private int number(int radix) {
             skipSpaces();
-            int value = 0;
             int start = position;
+            int value = 0;
             while (position < length) {
-                char c = text.charAt(position);
-                if (c == ' ' || c == '\n') {
+                int digit = Character.digit(bytes[position], 16);
+                if (digit < 0) {
                     break;
                 }
-                int digit = Character.digit(c, radix);
-                if (digit < 0) {
-                    throw new OntologyFormatException(0, null, "expected a number at character " + start);
-                }
-                value = value * radix + digit;
+                value = value * 16 + digit;
                 position++;
             }
-            if (position == start) {
-                throw new OntologyFormatException(0, null, "expected a number at character " + start);
+            return checkedEnd(start, value);
+        }
+
+        private int checkedEnd(int start, int value) {
+            if (position == start || (position < length && bytes[position] != ' ' && bytes[position] != '\n')) {
+                throw new OntologyFormatException(0, null, "expected a number at byte " + start + " of data.noun");
             }
             return value;
         }
 
         private void skipSpaces() {
-            while (position < length && text.charAt(position) == ' ') {
+            while (position < length && bytes[position] == ' ') {
                 position++;
             }
         }
 
         private void skipWord() {
-            while (position < length) {
-                char c = text.charAt(position);
-                if (c == ' ' || c == '\n') {
-                    return;
-                }
+            while (position < length && bytes[position] != ' ' && bytes[position] != '\n') {
                 position++;
             }
         }
 
         void skipLine() {
-            int end = text.indexOf('\n', position);
-            position = end < 0 ? length : end + 1;
+            while (position < length && bytes[position] != '\n') {
+                position++;
+            }
+            position++;
         }
     }
 }
