@@ -192,7 +192,8 @@ public final class OntologyBuilder {
             }
             Arrays.sort(scratch, 0, n);
             if (ancestorData.length - ancestorSize < n) {
-                ancestorData = Arrays.copyOf(ancestorData, Math.max(ancestorData.length * 2, ancestorSize + n));
+                ancestorData = Arrays.copyOf(ancestorData,
+                        Math.max(ancestorData.length + (ancestorData.length >> 1), ancestorSize + n));
             }
             ancestorStart[term] = ancestorSize;
             int last = -1;

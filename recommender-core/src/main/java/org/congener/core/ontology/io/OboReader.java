@@ -278,6 +278,13 @@ public final class OboReader {
                     }
                 }
             }
+            // the symbol table has done its job: let it go before the ancestor sets take their room
+            symbols.clear();
+            symbolIds.clear();
+            symbolNames.clear();
+            kinds = null;
+            definedAt = null;
+            target = null;
             return builder.build();
         }
 
