@@ -128,7 +128,11 @@ public final class OboReader {
             if (!inTerm) {
                 return;
             }
-            String tag = line.substring(0, colon).strip();
+            String tag = knownTag(line, colon);
+            if (tag == null) {
+                // def, synonym, xref, property_value, ...: nothing the graph needs, and no allocation for them
+                return;
+            }
             String value = line.substring(colon + 1);
             switch (tag) {
                 case "id" -> {
@@ -163,9 +167,7 @@ public final class OboReader {
                         replacedBy = singleToken(value, number, tag);
                     }
                 }
-                default -> {
-                    // other tags (def, synonym, xref, property_value, ...) carry nothing the graph needs
-                }
+                default -> throw new IllegalStateException("tag " + tag);
             }
         }
 
@@ -330,6 +332,23 @@ public final class OboReader {
             }
             return -1;
         }
+    }
+
+    private static final String[] KNOWN_TAGS =
+            {"id", "name", "is_a", "relationship", "alt_id", "is_obsolete", "replaced_by"};
+
+    /** The tag before the colon when the reader uses it, else null. */
+    private static String knownTag(String line, int colon) {
+        int end = colon;
+        while (end > 0 && Character.isWhitespace(line.charAt(end - 1))) {
+            end--;
+        }
+        for (String tag : KNOWN_TAGS) {
+            if (tag.length() == end && line.startsWith(tag)) {
+                return tag;
+            }
+        }
+        return null;
     }
 
     private static int indexOfWhitespace(String text) {

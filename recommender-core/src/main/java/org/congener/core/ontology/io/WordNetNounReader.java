@@ -5,7 +5,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Arrays;
-import java.util.Locale;
 
 import org.congener.core.ontology.GrowableIntArray;
 import org.congener.core.ontology.Ontology;
@@ -32,7 +31,9 @@ public final class WordNetNounReader {
         GrowableIntArray edgeParentOffset = new GrowableIntArray(1 << 17);
         GrowableIntArray edgeLine = new GrowableIntArray(1 << 17);
         OntologyBuilder builder = new OntologyBuilder(1 << 17);
-        java.util.ArrayList<String> lemmas = new java.util.ArrayList<>(1 << 18);
+        // lemma strings are made on the first look-up, from these positions in the file's bytes
+        GrowableIntArray lemmaStart = new GrowableIntArray(1 << 18);
+        GrowableIntArray lemmaEnd = new GrowableIntArray(1 << 18);
         GrowableIntArray lemmaTerms = new GrowableIntArray(1 << 18);
         int lineNumber = 0;
         while (cursor.hasMore()) {
@@ -50,13 +51,16 @@ public final class WordNetNounReader {
             String firstLemma = null;
             int term = builder.termCount();
             for (int w = 0; w < wordCount; w++) {
-                String lemma = cursor.token();
-                cursor.skipToken(); // lex_id
+                cursor.skipSpacesBeforeToken();
+                int start = cursor.position();
+                cursor.skipToken();
                 if (firstLemma == null) {
-                    firstLemma = lemma;
+                    firstLemma = cursor.textFrom(start);
                 }
-                lemmas.add(lemma.toLowerCase(Locale.ROOT));
+                lemmaStart.add(start);
+                lemmaEnd.add(cursor.position());
                 lemmaTerms.add(term);
+                cursor.skipToken(); // lex_id
             }
             builder.addTerm(offsetText, firstLemma, lineNumber);
             offsets.add(offset);
@@ -88,7 +92,8 @@ public final class WordNetNounReader {
             }
             builder.addEdge(edgeChild.get(e), parent, edgeLine.get(e));
         }
-        return new WordNetNouns(builder.build(), lemmas.toArray(new String[0]), lemmaTerms.toArray());
+        return new WordNetNouns(builder.build(), cursor.bytes(), lemmaStart.toArray(), lemmaEnd.toArray(),
+                lemmaTerms.toArray());
     }
 
     /** Space-separated tokens of the file's bytes, one line at a time. */
@@ -112,6 +117,14 @@ public final class WordNetNounReader {
 
         int position() {
             return position;
+        }
+
+        byte[] bytes() {
+            return bytes;
+        }
+
+        void skipSpacesBeforeToken() {
+            skipSpaces();
         }
 
         String textFrom(int start) {
