@@ -44,21 +44,36 @@ public final class CompoundSimilarity {
     }
 
     private double bestMatchAverage(int[] termsA, int[] termsB) {
-        double[] bestForB = new double[termsB.length];
-        double sumA = 0.0;
-        for (int a : termsA) {
-            double bestForA = 0.0;
+        double[] matrix = new double[termsA.length * termsB.length];
+        for (int i = 0; i < termsA.length; i++) {
             for (int j = 0; j < termsB.length; j++) {
-                double s = measure.similarity(a, termsB[j]);
-                bestForA = Math.max(bestForA, s);
-                bestForB[j] = Math.max(bestForB[j], s);
+                matrix[i * termsB.length + j] = measure.similarity(termsA[i], termsB[j]);
             }
-            sumA += bestForA;
         }
-        double sumB = 0.0;
-        for (double s : bestForB) {
-            sumB += s;
+        return bestMatchAverage(matrix, termsA.length, termsB.length);
+    }
+
+    /**
+     * Best-match average of a row-major matrix of term similarities (rows: A's terms, columns: B's terms), not
+     * modified. Public so that searches which fill the matrix their own way get bit-identical results.
+     */
+    public static double bestMatchAverage(double[] matrix, int rows, int columns) {
+        double sumRows = 0.0;
+        for (int i = 0; i < rows; i++) {
+            double best = 0.0;
+            for (int j = 0; j < columns; j++) {
+                best = Math.max(best, matrix[i * columns + j]);
+            }
+            sumRows += best;
         }
-        return 0.5 * (sumA / termsA.length + sumB / termsB.length);
+        double sumColumns = 0.0;
+        for (int j = 0; j < columns; j++) {
+            double best = 0.0;
+            for (int i = 0; i < rows; i++) {
+                best = Math.max(best, matrix[i * columns + j]);
+            }
+            sumColumns += best;
+        }
+        return 0.5 * (sumRows / rows + sumColumns / columns);
     }
 }
