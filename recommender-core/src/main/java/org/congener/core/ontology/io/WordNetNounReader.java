@@ -99,11 +99,14 @@ public final class WordNetNounReader {
     /** Space-separated tokens of the file's bytes, one line at a time. */
     private static final class Cursor {
         private final byte[] bytes;
+        // the same bytes as a Latin-1 string, whose indexOf finds line ends with vector instructions
+        private final String text;
         private final int length;
         private int position;
 
         Cursor(byte[] bytes) {
             this.bytes = bytes;
+            this.text = new String(bytes, StandardCharsets.ISO_8859_1);
             this.length = bytes.length;
         }
 
@@ -204,10 +207,8 @@ public final class WordNetNounReader {
         }
 
         void skipLine() {
-            while (position < length && bytes[position] != '\n') {
-                position++;
-            }
-            position++;
+            int end = text.indexOf('\n', position);
+            position = end < 0 ? length : end + 1;
         }
     }
 }
