@@ -28,7 +28,8 @@ import org.openjdk.jmh.annotations.Warmup;
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Warmup(iterations = 0)
 @Measurement(iterations = 1)
-@Fork(value = 10, jvmArgsAppend = {"-Xmx1g"})
+// the heap the ./congener launcher gives (CONGENER_JAVA_OPTS defaults to -Xmx4g)
+@Fork(value = 10, jvmArgsAppend = {"-Xmx4g"})
 public class WordNetLoadBenchmark {
 
     @Benchmark
