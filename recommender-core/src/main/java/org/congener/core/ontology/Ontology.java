@@ -22,7 +22,7 @@ public final class Ontology {
 
     private final String[] ids;
     private final String[] names;
-    private final Map<String, Integer> indexById;
+    private final IdIndex indexById;
     private final int termCount;
     private final int edgeCount;
     private final int[] roots;
@@ -38,7 +38,7 @@ public final class Ontology {
     private final int obsoleteTermsLeftOut;
     private final int aliasCount;
 
-    Ontology(String[] ids, String[] names, Map<String, Integer> indexById, int termCount, int edgeCount,
+    Ontology(String[] ids, String[] names, IdIndex indexById, int termCount, int edgeCount,
              int[] roots, int top, int[] parentOffsets, int[] parentData, int[] childOffsets, int[] childData,
              int[] ancestorStart, int[] ancestorEnd, int[] ancestorData, int[] depth, int obsoleteTermsLeftOut,
              int aliasCount) {
@@ -99,8 +99,7 @@ public final class Ontology {
      * -1 when the id is unknown.
      */
     public int termIndex(String id) {
-        Integer index = indexById.get(id);
-        return index == null ? -1 : index;
+        return indexById.get(id);
     }
 
     /** {@link #termIndex(String)} as an optional. */
@@ -202,8 +201,8 @@ public final class Ontology {
         return aliasCount;
     }
 
-    /** Every id that {@link #termIndex(String)} resolves, mapped to its dense id. */
+    /** Every id that {@link #termIndex(String)} resolves, mapped to its dense id (a new map each call). */
     public Map<String, Integer> indexById() {
-        return Collections.unmodifiableMap(indexById);
+        return Collections.unmodifiableMap(indexById.toMap());
     }
 }

@@ -2,9 +2,7 @@ package org.congener.core.ontology;
 
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.StringJoiner;
 
 /**
@@ -16,7 +14,7 @@ import java.util.StringJoiner;
 public final class OntologyBuilder {
     private final List<String> ids = new ArrayList<>();
     private final List<String> names = new ArrayList<>();
-    private final Map<String, Integer> indexById;
+    private final IdIndex indexById;
     private final GrowableIntArray edgeChild = new GrowableIntArray(1024);
     private final GrowableIntArray edgeParent = new GrowableIntArray(1024);
     private final GrowableIntArray edgeLine = new GrowableIntArray(1024);
@@ -30,7 +28,7 @@ public final class OntologyBuilder {
 
     /** @param expectedTerms how many terms to make room for (a hint; more are accepted) */
     public OntologyBuilder(int expectedTerms) {
-        indexById = new HashMap<>(Math.max(16, expectedTerms * 4 / 3 + 1));
+        indexById = new IdIndex(expectedTerms);
     }
 
     /**
@@ -45,8 +43,8 @@ public final class OntologyBuilder {
             throw new OntologyFormatException(line, id, "this id is reserved for the virtual root");
         }
         int index = ids.size();
-        Integer previous = indexById.putIfAbsent(id, index);
-        if (previous != null) {
+        int previous = indexById.putIfAbsent(id, index);
+        if (previous >= 0) {
             throw new OntologyFormatException(line, id, "duplicate id (already defined)");
         }
         ids.add(id);
@@ -56,8 +54,7 @@ public final class OntologyBuilder {
 
     /** Dense id of a term added before, or -1. */
     public int indexOf(String id) {
-        Integer index = indexById.get(id);
-        return index == null ? -1 : index;
+        return indexById.get(id);
     }
 
     public int termCount() {
@@ -81,11 +78,11 @@ public final class OntologyBuilder {
     public void addAlias(String alias, int term, int line) {
         checkNotBuilt();
         checkTerm(term);
-        Integer previous = indexById.putIfAbsent(alias, term);
-        if (previous != null && previous != term) {
+        int previous = indexById.putIfAbsent(alias, term);
+        if (previous >= 0 && previous != term) {
             throw new OntologyFormatException(line, alias, "duplicate id: already names term " + ids.get(previous));
         }
-        if (previous == null) {
+        if (previous < 0) {
             aliasCount++;
         }
     }
