@@ -77,6 +77,10 @@ final class RescoringSearch extends NeighbourSearch {
             private long[] order = new long[64];
             private int[] ancestors = new int[64];
             private double[] bounds = new double[64];
+            private final int[] processedStamp = filled(ontology.size());
+            private long[] termEntries = new long[64];
+            private int[] termOffsets = new int[8];
+            private int[] termCursor = new int[8];
             private double[] matrix = new double[16];
             private double[] micaIc = new double[4];
             private int[] mica = new int[4];
@@ -88,13 +92,19 @@ final class RescoringSearch extends NeighbourSearch {
                     markAncestors(q);
                 }
                 int entries = collectAncestors(q);
+                boolean perTermBound = similarity.aggregation() == Aggregation.BEST_MATCH_AVERAGE
+                        && terms[q].length > 1;
+                if (perTermBound) {
+                    collectTermEntries(q);
+                }
                 long scored = 0;
                 for (int i = entries - 1; i >= 0; i--) {
-                    float bound = boundOf(order[i]);
+                    double bound = perTermBound ? bestMatchAverageBound(q) : boundOf(order[i]);
                     if (bound <= 0 || (top.isFull() && bound < top.worstScore())) {
                         break;
                     }
                     int m = ancestors[positionOf(order[i])];
+                    processedStamp[m] = q;
                     for (int p = postingOffsets[m]; p < postingOffsets[m + 1]; p++) {
                         int c = postings[p];
                         if (c == q || scoredStamp[c] == q) {
@@ -110,6 +120,55 @@ final class RescoringSearch extends NeighbourSearch {
                 }
                 neighbourCount[q] = top.drainInto(neighbourIndex, neighbourSimilarity, q * settings.k());
                 return scored;
+            }
+
+            /** Each query term's own ancestors, by falling bound, for {@link #bestMatchAverageBound(int)}. */
+            private void collectTermEntries(int q) {
+                int[] queryTerms = terms[q];
+                if (termOffsets.length <= queryTerms.length) {
+                    termOffsets = new int[queryTerms.length + 1];
+                    termCursor = new int[queryTerms.length];
+                }
+                int n = 0;
+                for (int i = 0; i < queryTerms.length; i++) {
+                    int a = queryTerms[i];
+                    termOffsets[i] = n;
+                    int needed = n + ontology.ancestorCount(a);
+                    if (termEntries.length < needed) {
+                        termEntries = Arrays.copyOf(termEntries, needed * 2);
+                    }
+                    for (int k = ontology.ancestorsFrom(a); k < ontology.ancestorsTo(a); k++) {
+                        int m = ontology.ancestorAt(k);
+                        termEntries[n++] = sortKey(measure.upperBound(a, m), m);
+                    }
+                    Arrays.sort(termEntries, termOffsets[i], n);
+                    termCursor[i] = n - 1;
+                }
+                termOffsets[queryTerms.length] = n;
+            }
+
+            /**
+             * A bound on the best-match average of every compound not scored yet. For each query term a_i let
+             * β_i be the bound of its best ancestor not taken yet: every pair (a_i, b) of such a compound has its
+             * MICA among those, so sim(a_i, b) ≤ β_i. Rows then average to at most mean β_i and columns to at
+             * most max β_i, so BMA ≤ ½(mean β_i + max β_i), tighter than max β_i when the terms differ.
+             */
+            private double bestMatchAverageBound(int q) {
+                int p = terms[q].length;
+                double sum = 0;
+                double max = 0;
+                for (int i = 0; i < p; i++) {
+                    int at = termCursor[i];
+                    while (at >= termOffsets[i] && processedStamp[positionOf(termEntries[at])] == q) {
+                        at--;
+                    }
+                    termCursor[i] = at;
+                    double beta = at >= termOffsets[i] ? boundOf(termEntries[at]) : 0.0;
+                    sum += beta;
+                    max = Math.max(max, beta);
+                }
+                // rounded up so that floating-point error never makes the bound too low
+                return Math.nextUp(0.5 * (sum / p + max));
             }
 
             private void markAncestors(int q) {
