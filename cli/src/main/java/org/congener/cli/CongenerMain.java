@@ -11,6 +11,8 @@ import picocli.CommandLine.Command;
                 + "Suggestions are no safety review: read the safety data sheet before use.",
         subcommands = {
                 CommandLine.HelpCommand.class,
+                SimilarityCommand.class,
+                OntologyStatsCommand.class,
         })
 public final class CongenerMain {
 
