@@ -13,6 +13,8 @@ import picocli.CommandLine.Command;
                 CommandLine.HelpCommand.class,
                 DemoCommand.class,
                 StreamsCommand.class,
+                SimilarityCommand.class,
+                OntologyStatsCommand.class,
         })
 public final class CongenerMain {
 
