@@ -61,6 +61,10 @@ class StreamsAppIntegrationTest {
         try (StreamsApp app = StreamsApp.start(config)) {
             assertTrue(app.awaitRunning(WAIT), "streams app reached RUNNING");
 
+            // an unreadable catalogue record arriving while the app runs is skipped; the app carries on
+            try (KafkaProducer<String, String> producer = producer(bootstrap)) {
+                producer.send(new ProducerRecord<>(prefix + "catalog", "c-broken", "{\"schema\": 42"));
+            }
             List<UsageEvent> good = List.of(
                     Fixtures.event("g1", "ben", "c-acetone", UsageKind.ORDER, "2026-01-02T10:00:00Z"),
                     Fixtures.event("g2", "ben", "c-toluene", UsageKind.ORDER, "2026-01-02T11:00:00Z"),

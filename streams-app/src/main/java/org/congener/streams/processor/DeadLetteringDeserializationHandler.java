@@ -3,6 +3,7 @@ package org.congener.streams.processor;
 import java.time.Instant;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 import org.apache.kafka.clients.consumer.ConsumerRecord;
 import org.apache.kafka.clients.producer.ProducerRecord;
@@ -19,10 +20,12 @@ import org.slf4j.LoggerFactory;
 /**
  * For a value Kafka Streams itself cannot deserialize (catalogue, researchers, stock, or the
  * suggestions table): logs topic, partition and offset, hands Kafka Streams a dead letter in
- * Congener's format to write to {@code dead-letters}, and carries on. Kafka Streams writes such
- * records only from stream threads: for the global tables (catalogue, researchers, stock) the log
- * line is all that remains. Usage events never get here: they are read as raw bytes by
- * {@link UsageEventIntake}.
+ * Congener's format to write to {@code dead-letters}, and carries on. Usage events never get here:
+ * they are read as raw bytes by {@link UsageEventIntake}.
+ *
+ * <p>For the topics behind global tables (catalogue, researchers, stock) the log line is all that
+ * remains: Kafka Streams 4.4 cannot write records handed back from its global thread (it fails with a
+ * ClassCastException and the whole client stops), so the handler hands back none there.
  */
 public final class DeadLetteringDeserializationHandler implements DeserializationExceptionHandler {
 
@@ -32,17 +35,29 @@ public final class DeadLetteringDeserializationHandler implements Deserializatio
     private static final Logger LOG = LoggerFactory.getLogger(DeadLetteringDeserializationHandler.class);
 
     private Topic<DeadLetter> deadLetters = new Topics("").deadLetters();
+    private Set<String> globalTableTopics = globalTableTopics(new Topics(""));
 
     @Override
     public void configure(Map<String, ?> configs) {
         Object prefix = configs.get(TOPIC_PREFIX_CONFIG);
-        deadLetters = new Topics(prefix == null ? "" : prefix.toString()).deadLetters();
+        Topics topics = new Topics(prefix == null ? "" : prefix.toString());
+        deadLetters = topics.deadLetters();
+        globalTableTopics = globalTableTopics(topics);
+    }
+
+    private static Set<String> globalTableTopics(Topics topics) {
+        return Set.of(topics.catalog().name(), topics.researchers().name(), topics.inventoryEvents().name());
     }
 
     @Override
     public Response handleError(ErrorHandlerContext context, ConsumerRecord<byte[], byte[]> record, Exception exception) {
         String reason = exception instanceof InvalidRecordException invalid ? invalid.reason()
                 : exception.getMessage() == null ? exception.getClass().getSimpleName() : exception.getMessage();
+        if (globalTableTopics.contains(record.topic())) {
+            LOG.warn("skipped unreadable record of {} partition {} offset {}: {}", record.topic(), record.partition(),
+                    record.offset(), reason);
+            return Response.resume();
+        }
         LOG.warn("dead letter from {} partition {} offset {}: {}", record.topic(), record.partition(), record.offset(),
                 reason);
         DeadLetter letter = DeadLetters.of(record.topic(), record.partition(), record.offset(), reason,
