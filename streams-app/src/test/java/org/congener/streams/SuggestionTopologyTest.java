@@ -29,6 +29,11 @@ import org.congener.schemas.Suggestions;
 import org.congener.schemas.UsageEvent;
 import org.congener.schemas.UsageKind;
 import org.congener.streams.processor.DeadLetteringDeserializationHandler;
+import org.congener.streams.processor.DeadLetteringProcessingHandler;
+import org.congener.streams.scoring.GroupPopularityScorer;
+import org.congener.streams.scoring.ScoredCandidate;
+import org.congener.streams.scoring.ScoringInput;
+import org.congener.streams.scoring.SuggestionScorer;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -48,13 +53,27 @@ class SuggestionTopologyTest {
 
     @BeforeEach
     void start() {
+        start(null);
+    }
+
+    /** @param scorer null for the baseline */
+    private void start(SuggestionScorer scorer) {
+        if (driver != null) {
+            driver.close();
+        }
         StreamsBuilder builder = new StreamsBuilder();
-        SuggestionTopology.build(builder, new SuggestionTopology.Settings("lab.", 3, Duration.ofDays(30)));
+        SuggestionTopology.Settings settings = new SuggestionTopology.Settings("lab.", 3, Duration.ofDays(30));
+        if (scorer == null) {
+            SuggestionTopology.build(builder, settings);
+        } else {
+            SuggestionTopology.build(builder, settings, scorer);
+        }
         Properties props = new Properties();
         props.put(StreamsConfig.APPLICATION_ID_CONFIG, "topology-test");
         props.put(StreamsConfig.BOOTSTRAP_SERVERS_CONFIG, "unused:9092");
         props.put(StreamsConfig.STATE_DIR_CONFIG, stateDir.toString());
         props.put(StreamsConfig.DESERIALIZATION_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringDeserializationHandler.class);
+        props.put(StreamsConfig.PROCESSING_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringProcessingHandler.class);
         props.put(DeadLetteringDeserializationHandler.TOPIC_PREFIX_CONFIG, "lab.");
         driver = new TopologyTestDriver(builder.build(), props);
 
@@ -229,6 +248,34 @@ class SuggestionTopologyTest {
         // so an event on that compound is refused as unknown
         usage.pipeInput("ben", Fixtures.json(Fixtures.event("e-b", "ben", "c-broken", UsageKind.ORDER, Fixtures.DAY0)));
         assertEquals("unknown compound 'c-broken'", deadLetters.readValue().reason());
+    }
+
+    @Test
+    void shouldDeadLetterRecordAndCarryOnWhenScorerThrows() {
+        SuggestionScorer baseline = new GroupPopularityScorer(Duration.ofDays(30).toMillis());
+        start(new SuggestionScorer() {
+            @Override
+            public SuggestionSource source() {
+                return baseline.source();
+            }
+
+            @Override
+            public List<ScoredCandidate> rank(ScoringInput input, int n) {
+                if (input.researcher().researcherId().equals("cyd")) {
+                    throw new IllegalStateException("scorer defect");
+                }
+                return baseline.rank(input, n);
+            }
+        });
+        send("ben", "c-acetone", UsageKind.ORDER, "2026-01-02T10:00:00Z");
+        send("cyd", "c-toluene", UsageKind.ORDER, "2026-01-02T11:00:00Z");
+        send("ada", "c-ethanol", UsageKind.ORDER, "2026-01-02T12:00:00Z");
+
+        assertEquals(List.of("e1", "e3"), suggestions.readValuesToList().stream().map(Suggestions::causedByEventId).toList());
+        DeadLetter letter = deadLetters.readValue();
+        assertTrue(letter.reason().contains("scorer defect"), letter.reason());
+        assertTrue(letter.sourceTopic().endsWith("usage-by-group-repartition"), letter.sourceTopic());
+        assertTrue(letter.payload().contains("\"eventId\":\"e2\""), letter.payload());
     }
 
     private double deadLetterCount() {

@@ -13,6 +13,7 @@ import org.apache.kafka.common.config.ConfigDef.Type;
 import org.apache.kafka.common.config.ConfigDef.ValidString;
 import org.apache.kafka.streams.StreamsConfig;
 import org.congener.streams.processor.DeadLetteringDeserializationHandler;
+import org.congener.streams.processor.DeadLetteringProcessingHandler;
 
 /**
  * Every setting of the streams app, declared once with key, type, default, validator and doc
@@ -165,6 +166,7 @@ public final class AppConfig extends AbstractConfig {
         p.put(StreamsConfig.COMMIT_INTERVAL_MS_CONFIG, commitIntervalMs());
         p.put(StreamsConfig.consumerPrefix(ConsumerConfig.FETCH_MAX_WAIT_MS_CONFIG), 50);
         p.put(StreamsConfig.DESERIALIZATION_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringDeserializationHandler.class);
+        p.put(StreamsConfig.PROCESSING_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringProcessingHandler.class);
         p.put(DeadLetteringDeserializationHandler.TOPIC_PREFIX_CONFIG, topicPrefix());
         return p;
     }
