@@ -11,6 +11,7 @@ import picocli.CommandLine.Command;
                 + "Suggestions are no safety review: read the safety data sheet before use.",
         subcommands = {
                 CommandLine.HelpCommand.class,
+                EvaluateCommand.class,
         })
 public final class CongenerMain {
 

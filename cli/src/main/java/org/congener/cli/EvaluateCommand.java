@@ -1,0 +1,177 @@
+package org.congener.cli;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.congener.core.fusion.NeighbourLists;
+import org.congener.core.interactions.InteractionLog;
+import org.congener.core.interactions.InteractionWeights;
+import org.congener.core.split.LeaveKOut;
+import org.congener.core.split.Splitter;
+import org.congener.core.split.TimeSplit;
+import org.congener.trainer.evaluation.CatalogFileReader;
+import org.congener.trainer.evaluation.EdgeListTaxonomy;
+import org.congener.trainer.evaluation.ExperimentReport;
+import org.congener.trainer.evaluation.ExperimentSettings;
+import org.congener.trainer.evaluation.InputFileException;
+import org.congener.trainer.evaluation.InteractionFileReader;
+import org.congener.trainer.evaluation.OfflineExperiment;
+import org.congener.trainer.evaluation.Progress;
+import org.congener.trainer.evaluation.ReportWriter;
+import org.congener.trainer.evaluation.TaxonomyNeighbours;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Spec;
+
+/** {@code congener evaluate}: the offline experiment over every model and fusion rule, with a report. */
+@Command(name = "evaluate", mixinStandardHelpOptions = true,
+        description = {"Trains ALS, BPR, semantic-only, popularity and the fused models on one held-out split,",
+            "picks their settings on a validation part of the training data, prints a table and writes",
+            "report.json and report.html. Suggestions are no safety review."})
+public final class EvaluateCommand implements Callable<Integer> {
+
+    @Spec
+    private CommandSpec spec;
+
+    @Option(names = "--events", required = true, paramLabel = "FILE",
+            description = "usage events as JSON lines, or a researcher<TAB>compound<TAB>strength[<TAB>time] TSV")
+    private Path events;
+
+    @Option(names = "--catalog", paramLabel = "FILE",
+            description = "catalogue entries as JSON lines (compoundId, termIds); leave out when the item ids are "
+                    + "ontology terms themselves")
+    private Path catalog;
+
+    @Option(names = "--ontology", paramLabel = "FILE",
+            description = "the taxonomy; without it the semantic and fused models are left out")
+    private Path ontology;
+
+    @Option(names = "--format", paramLabel = "obo|edges",
+            description = "ontology format (default: obo for *.obo files, else edges: child<TAB>parent lines)")
+    private String format;
+
+    @Option(names = "--split", defaultValue = "time:0.2", paramLabel = "SPLIT",
+            description = "time:FRACTION (latest fraction per researcher) or leave-k-out:K[:SEED]; default ${DEFAULT-VALUE}")
+    private String split;
+
+    @Option(names = "--k", defaultValue = "1,5,10,20", split = ",", paramLabel = "K",
+            description = "cut-offs of the @k metrics; default ${DEFAULT-VALUE}")
+    private int[] ks;
+
+    @Option(names = "--out", defaultValue = "evaluation-report", paramLabel = "DIR",
+            description = "where report.json and report.html go; default ${DEFAULT-VALUE}")
+    private Path out;
+
+    @Option(names = "--ranks", split = ",", paramLabel = "R", description = "rank grid; default 16,32")
+    private List<Integer> ranks;
+
+    @Option(names = "--lambdas", split = ",", paramLabel = "L", description = "ALS λ grid; default 0.05,0.5")
+    private List<Double> lambdas;
+
+    @Option(names = "--alphas", split = ",", paramLabel = "A", description = "ALS α grid; default 5,20")
+    private List<Double> alphas;
+
+    @Option(names = "--iterations", defaultValue = "10", description = "ALS iterations; default ${DEFAULT-VALUE}")
+    private int iterations;
+
+    @Option(names = "--seed", defaultValue = "42", description = "seed of models, split and bootstrap")
+    private long seed;
+
+    @Option(names = "--threads", defaultValue = "0", description = "worker threads; 0 = all cores")
+    private int threads;
+
+    @Override
+    public Integer call() {
+        int[] cutoffs = validKs();
+        Splitter splitter = parseSplit();
+        try {
+            Map<String, List<String>> terms = catalog == null ? null : CatalogFileReader.termsByCompound(catalog);
+            List<String> knownItems = terms == null ? List.of() : List.copyOf(terms.keySet());
+            InteractionLog log = InteractionFileReader.read(events, InteractionWeights.defaults(), knownItems);
+            ExperimentSettings settings = ExperimentSettings.defaults(splitter, cutoffs)
+                    .withIterations(iterations).withSeed(seed);
+            if (threads > 0) {
+                settings = settings.withThreads(threads);
+            }
+            if (ranks != null || lambdas != null || alphas != null) {
+                settings = settings.withGrid(ranks == null ? settings.ranks() : ranks,
+                        lambdas == null ? settings.lambdas() : lambdas, alphas == null ? settings.alphas() : alphas);
+            }
+            Map<String, Object> extra = new LinkedHashMap<>();
+            NeighbourLists neighbours = null;
+            if (ontology != null) {
+                neighbours = neighbours(log, terms, settings.neighbours(), extra);
+            }
+            var err = spec.commandLine().getErr();
+            err.printf("%d researchers, %d items, %d interactions%n", log.users().size(), log.items().size(),
+                    log.interactions().size());
+            Progress progress = new Progress(System.err, OfflineExperiment.steps(settings, neighbours != null));
+            ExperimentReport report = new OfflineExperiment(settings, progress).run(log, neighbours, extra);
+            ReportWriter.printTable(report, System.out);
+            ReportWriter.writeAll(report, out);
+            System.out.println("wrote " + out.resolve("report.json") + " and " + out.resolve("report.html"));
+            return 0;
+        } catch (InputFileException e) {
+            spec.commandLine().getErr().println("congener evaluate: " + e.getMessage());
+            return 1;
+        } catch (IOException e) {
+            spec.commandLine().getErr().println("congener evaluate: cannot write the report to " + out + ": " + e.getMessage());
+            return 1;
+        }
+    }
+
+    private NeighbourLists neighbours(InteractionLog log, Map<String, List<String>> terms, int k,
+                                      Map<String, Object> extra) {
+        String kind = format != null ? format : ontology.toString().endsWith(".obo") ? "obo" : "edges";
+        if (!Files.isRegularFile(ontology)) {
+            throw new InputFileException(ontology, 0, "no such file");
+        }
+        if (kind.equals("obo")) {
+            // the OBO reader belongs to the ontology module, which this build does not have yet
+            throw new InputFileException(ontology, 0, "--format obo is not available in this build yet; "
+                    + "give the is-a edges as child<TAB>parent lines with --format edges");
+        }
+        if (!kind.equals("edges")) {
+            throw new ParameterException(spec.commandLine(), "--format must be obo or edges, not '" + kind + "'");
+        }
+        EdgeListTaxonomy taxonomy = EdgeListTaxonomy.read(ontology);
+        TaxonomyNeighbours.Result result = TaxonomyNeighbours.build(taxonomy, log.items(), terms, k);
+        extra.put("ontologyTerms", taxonomy.termCount());
+        extra.put("itemsWithoutTerms", result.itemsWithoutTerms());
+        return result.neighbours();
+    }
+
+    private int[] validKs() {
+        if (ks.length == 0) {
+            throw new ParameterException(spec.commandLine(), "--k needs at least one cut-off");
+        }
+        for (int k : ks) {
+            if (k < 1) {
+                throw new ParameterException(spec.commandLine(), "--k values must be >= 1, got " + k);
+            }
+        }
+        return ks.clone();
+    }
+
+    private Splitter parseSplit() {
+        String[] parts = split.split(":");
+        try {
+            if (parts[0].equals("time") && parts.length == 2) {
+                return new TimeSplit(Double.parseDouble(parts[1]));
+            }
+            if (parts[0].equals("leave-k-out") && (parts.length == 2 || parts.length == 3)) {
+                return new LeaveKOut(Integer.parseInt(parts[1]), parts.length == 3 ? Long.parseLong(parts[2]) : seed);
+            }
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), "--split '" + split + "': " + e.getMessage());
+        }
+        throw new ParameterException(spec.commandLine(),
+                "--split must be time:FRACTION or leave-k-out:K[:SEED], not '" + split + "'");
+    }
+}
