@@ -52,8 +52,8 @@ public final class AlsSideBySide {
         int rounds = args.length > 3 ? Integer.parseInt(args[3]) : 3;
 
         System.out.printf(Locale.ROOT, "multiply-adds/s on %d threads: scalar %.2f G, vector %.2f G (%s)%n", THREADS,
-                MultiplyAddRate.measure(DenseKernels.scalar(), THREADS) / 1e9,
-                MultiplyAddRate.measure(DenseKernels.best(), THREADS) / 1e9, DenseKernels.best());
+                MultiplyAddRate.best(DenseKernels.scalar(), THREADS, 5) / 1e9,
+                MultiplyAddRate.best(DenseKernels.best(), THREADS, 5) / 1e9, DenseKernels.best());
 
         InteractionMatrix all = PlantedInteractions.generate(users, items, interactions, 16, 2.0, 20L);
         Split split = new LeaveKOut(1, 1L).split(cells(all));
