@@ -85,6 +85,17 @@ class AlsOptimalityTest {
     }
 
     @Test
+    void shouldZeroTheGradientWithTheLogConfidenceFormToo() {
+        // c = 1 + α ln(1 + r/ε), Hu, Koren & Volinsky 2008, section 4
+        AlsConfig cfg = config(SolverKind.CHOLESKY, Regularisation.PLAIN).withConfidence(ConfidenceForm.LOG);
+        ImplicitAls als = new ImplicitAls(cfg);
+        AlsModel model = als.fit(DATA);
+        FactorMatrix x = als.userHalfStep(model, DATA);
+        assertTrue(relativeGradient(DATA.byUser(), x, model.itemFactors(), cfg) < 1e-9);
+        assertEquals(1 + 3.0 * Math.log(3.0), cfg.confidenceOf(2.0), 1e-12);
+    }
+
+    @Test
     void shouldMatchTheTrainersUserHalfStepWhenFoldingInEachUserExactly() {
         AlsConfig cfg = config(SolverKind.CHOLESKY, Regularisation.PLAIN);
         ImplicitAls als = new ImplicitAls(cfg);
