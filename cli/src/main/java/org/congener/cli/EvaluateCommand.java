@@ -7,6 +7,10 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import java.time.Instant;
+import org.congener.demo.DemoData;
+import org.congener.schemas.CatalogEntry;
+import org.congener.schemas.UsageEvent;
 import org.congener.core.fusion.NeighbourLists;
 import org.congener.core.interactions.InteractionLog;
 import org.congener.core.interactions.InteractionWeights;
@@ -39,9 +43,13 @@ public final class EvaluateCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Option(names = "--events", required = true, paramLabel = "FILE",
+    @Option(names = "--events", paramLabel = "FILE",
             description = "usage events as JSON lines, or a researcher<TAB>compound<TAB>strength[<TAB>time] TSV")
     private Path events;
+
+    @Option(names = "--demo", description = "evaluate on the shipped demo scenario's events and catalogue "
+            + "(instead of --events and --catalog)")
+    private boolean demo;
 
     @Option(names = "--catalog", paramLabel = "FILE",
             description = "catalogue entries as JSON lines (compoundId, termIds); leave out when the item ids are "
@@ -90,10 +98,27 @@ public final class EvaluateCommand implements Callable<Integer> {
     public Integer call() {
         int[] cutoffs = validKs();
         Splitter splitter = parseSplit();
+        if (demo == (events != null)) {
+            throw new ParameterException(spec.commandLine(), "give either --events FILE or --demo");
+        }
+        if (demo && catalog != null) {
+            throw new ParameterException(spec.commandLine(), "--demo brings its own catalogue; leave out --catalog");
+        }
         try {
-            Map<String, List<String>> terms = catalog == null ? null : CatalogFileReader.termsByCompound(catalog);
-            List<String> knownItems = terms == null ? List.of() : List.copyOf(terms.keySet());
-            InteractionLog log = InteractionFileReader.read(events, InteractionWeights.defaults(), knownItems);
+            Map<String, List<String>> terms;
+            InteractionLog log;
+            if (demo) {
+                terms = demoTerms();
+                log = demoLog(terms);
+            } else {
+                terms = catalog == null ? null : CatalogFileReader.termsByCompound(catalog);
+                List<String> knownItems = terms == null ? List.of() : List.copyOf(terms.keySet());
+                log = InteractionFileReader.read(events, InteractionWeights.defaults(), knownItems);
+            }
+            if (demo && ontology == null) {
+                spec.commandLine().getErr().println("note: the demo ontology is OBO, which this build cannot read yet; "
+                        + "the semantic and fused models are left out");
+            }
             ExperimentSettings settings = ExperimentSettings.defaults(splitter, cutoffs)
                     .withIterations(iterations).withSeed(seed);
             if (threads > 0) {
@@ -124,6 +149,21 @@ public final class EvaluateCommand implements Callable<Integer> {
             spec.commandLine().getErr().println("congener evaluate: cannot write the report to " + out + ": " + e.getMessage());
             return 1;
         }
+    }
+
+    private static Map<String, List<String>> demoTerms() {
+        Map<String, List<String>> terms = new LinkedHashMap<>();
+        for (CatalogEntry entry : DemoData.catalog()) {
+            terms.put(entry.compoundId(), entry.termIds());
+        }
+        return terms;
+    }
+
+    private static InteractionLog demoLog(Map<String, List<String>> terms) {
+        List<UsageEvent> usage = DemoData.usageEvents();
+        Instant latest = usage.stream().map(e -> Instant.parse(e.occurredAt())).max(Instant::compareTo)
+                .orElse(Instant.EPOCH);
+        return InteractionLog.fromEvents(usage, InteractionWeights.defaults(), latest, terms.keySet());
     }
 
     private NeighbourLists neighbours(InteractionLog log, Map<String, List<String>> terms, int k,

@@ -79,6 +79,34 @@ class EvaluateCommandTest {
     }
 
     @Test
+    void shouldEvaluateTheCollaborativeModelsOnTheDemoScenario(@TempDir Path dir) throws Exception {
+        PrintStream original = System.out;
+        ByteArrayOutputStream captured = new ByteArrayOutputStream();
+        int code;
+        try {
+            System.setOut(new PrintStream(captured, true, StandardCharsets.UTF_8));
+            code = CongenerMain.run("evaluate", "--demo", "--k", "10", "--ranks", "8", "--lambdas", "0.1",
+                    "--alphas", "5", "--threads", "2", "--out", dir.toString());
+        } finally {
+            System.setOut(original);
+        }
+        String table = captured.toString(StandardCharsets.UTF_8);
+        assertEquals(0, code, table);
+        assertTrue(table.contains("ALS") && table.contains("popularity"), table);
+        String json = Files.readString(dir.resolve("report.json"));
+        // the demo has 300 researchers (demo-events' researchers.jsonl)
+        assertTrue(json.contains("\"researchers\" : 300"), json.substring(0, Math.min(400, json.length())));
+    }
+
+    @Test
+    void shouldRefuseBothEventsAndDemo(@TempDir Path dir) throws Exception {
+        Path events = dir.resolve("e.tsv");
+        Files.write(events, List.of("r1\tc1\t1"));
+        assertEquals(2, CongenerMain.run("evaluate", "--events", events.toString(), "--demo"));
+        assertEquals(2, CongenerMain.run("evaluate"));
+    }
+
+    @Test
     void shouldRejectAMalformedSplitFlag(@TempDir Path dir) throws Exception {
         Path events = dir.resolve("e.tsv");
         Files.write(events, List.of("r1\tc1\t1"));
