@@ -11,6 +11,7 @@ import java.time.Instant;
 import org.congener.demo.DemoData;
 import org.congener.schemas.CatalogEntry;
 import org.congener.schemas.UsageEvent;
+import org.congener.schemas.UsageKind;
 import org.congener.core.fusion.NeighbourLists;
 import org.congener.core.interactions.InteractionLog;
 import org.congener.core.interactions.InteractionWeights;
@@ -85,6 +86,14 @@ public final class EvaluateCommand implements Callable<Integer> {
     @Option(names = "--alphas", split = ",", paramLabel = "A", description = "ALS α grid; default 5,20")
     private List<Double> alphas;
 
+    @Option(names = "--half-life", paramLabel = "DURATION",
+            description = "decay of event weights, ISO-8601 duration such as P90D; default none")
+    private String halfLife;
+
+    @Option(names = "--weights", paramLabel = "KIND=W,...", split = ",",
+            description = "event-kind weights, e.g. order=1,withdrawal=0.6,usage-log=0.4,view=0.1 (the default)")
+    private Map<String, Double> kindWeights;
+
     @Option(names = "--iterations", defaultValue = "10", description = "ALS iterations; default ${DEFAULT-VALUE}")
     private int iterations;
 
@@ -109,11 +118,11 @@ public final class EvaluateCommand implements Callable<Integer> {
             InteractionLog log;
             if (demo) {
                 terms = demoTerms();
-                log = demoLog(terms);
+                log = demoLog(terms, weights());
             } else {
                 terms = catalog == null ? null : CatalogFileReader.termsByCompound(catalog);
                 List<String> knownItems = terms == null ? List.of() : List.copyOf(terms.keySet());
-                log = InteractionFileReader.read(events, InteractionWeights.defaults(), knownItems);
+                log = InteractionFileReader.read(events, weights(), knownItems);
             }
             if (demo && ontology == null) {
                 spec.commandLine().getErr().println("note: the demo ontology is OBO, which this build cannot read yet; "
@@ -159,11 +168,41 @@ public final class EvaluateCommand implements Callable<Integer> {
         return terms;
     }
 
-    private static InteractionLog demoLog(Map<String, List<String>> terms) {
+    private InteractionWeights weights() {
+        InteractionWeights defaults = InteractionWeights.defaults();
+        Map<UsageKind, Double> byKind = new java.util.EnumMap<>(defaults.kindWeights());
+        if (kindWeights != null) {
+            for (Map.Entry<String, Double> e : kindWeights.entrySet()) {
+                try {
+                    byKind.put(UsageKind.valueOf(e.getKey().toUpperCase(java.util.Locale.ROOT).replace('-', '_')),
+                            e.getValue());
+                } catch (IllegalArgumentException ex) {
+                    throw new ParameterException(spec.commandLine(), "--weights: unknown kind '" + e.getKey()
+                            + "' (order, withdrawal, usage-log, view)");
+                }
+            }
+        }
+        java.time.Duration decay = null;
+        if (halfLife != null) {
+            try {
+                decay = java.time.Duration.parse(halfLife);
+            } catch (java.time.format.DateTimeParseException ex) {
+                throw new ParameterException(spec.commandLine(), "--half-life '" + halfLife
+                        + "' is no ISO-8601 duration (e.g. P90D)");
+            }
+        }
+        try {
+            return new InteractionWeights(byKind, defaults.quantityScale(), decay);
+        } catch (IllegalArgumentException ex) {
+            throw new ParameterException(spec.commandLine(), ex.getMessage());
+        }
+    }
+
+    private static InteractionLog demoLog(Map<String, List<String>> terms, InteractionWeights weights) {
         List<UsageEvent> usage = DemoData.usageEvents();
         Instant latest = usage.stream().map(e -> Instant.parse(e.occurredAt())).max(Instant::compareTo)
                 .orElse(Instant.EPOCH);
-        return InteractionLog.fromEvents(usage, InteractionWeights.defaults(), latest, terms.keySet());
+        return InteractionLog.fromEvents(usage, weights, latest, terms.keySet());
     }
 
     private NeighbourLists neighbours(InteractionLog log, Map<String, List<String>> terms, int k,

@@ -104,6 +104,8 @@ class EvaluateCommandTest {
         Files.write(events, List.of("r1\tc1\t1"));
         assertEquals(2, CongenerMain.run("evaluate", "--events", events.toString(), "--demo"));
         assertEquals(2, CongenerMain.run("evaluate"));
+        assertEquals(2, CongenerMain.run("evaluate", "--demo", "--half-life", "ninety days"));
+        assertEquals(2, CongenerMain.run("evaluate", "--demo", "--weights", "purchase=1"));
     }
 
     @Test
