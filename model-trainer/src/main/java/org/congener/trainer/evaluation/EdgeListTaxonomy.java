@@ -24,7 +24,7 @@ import java.util.Map;
  *       ICML); 1 when a = b</li>
  * </ul>
  */
-public final class EdgeListTaxonomy {
+public final class EdgeListTaxonomy implements TermSimilarity {
     private final Map<String, Integer> index = new HashMap<>();
     private final List<String> terms = new ArrayList<>();
     private final List<List<Integer>> parents = new ArrayList<>();
@@ -138,11 +138,18 @@ public final class EdgeListTaxonomy {
         }
     }
 
+    @Override
+    public double similarity(int termA, int termB) {
+        return lin(termA, termB);
+    }
+
+    @Override
     public int termCount() {
         return terms.size();
     }
 
     /** Index of a term id, or −1 when the taxonomy does not have it. */
+    @Override
     public int indexOf(String termId) {
         Integer i = index.get(termId);
         return i == null ? -1 : i;

@@ -20,7 +20,7 @@ public final class TaxonomyNeighbours {
     public record Result(NeighbourLists neighbours, int itemsWithoutTerms) {
     }
 
-    public static Result build(EdgeListTaxonomy taxonomy, IdIndex items, Map<String, List<String>> catalogTerms,
+    public static Result build(TermSimilarity taxonomy, IdIndex items, Map<String, List<String>> catalogTerms,
                                int topK) {
         int n = items.size();
         int[][] termsOf = new int[n][];
@@ -44,7 +44,7 @@ public final class TaxonomyNeighbours {
             double best = 0;
             for (int ta : termsOf[a]) {
                 for (int tb : termsOf[b]) {
-                    best = Math.max(best, taxonomy.lin(ta, tb));
+                    best = Math.max(best, taxonomy.similarity(ta, tb));
                 }
             }
             return best;
