@@ -119,9 +119,10 @@ public final class AlsSideBySide {
         int s = cg.cgSteps();
         // CG per row and half-step: (s + 1)·(k² Gram product + 2·n_u·k for the sparse part); Gram 2 × n·k²/2
         double cgOps = (s + 1) * (rows * (double) RANK * RANK + 2.0 * 2 * nnz * RANK) + rows * (double) RANK * RANK / 2;
-        // Cholesky: n_u·k²/2 rank-one updates + k³/3 factorisation + n_u·k right-hand side, both half-steps
-        double cholOps = 2.0 * nnz * RANK * RANK / 2 + rows * Math.pow(RANK, 3) / 3 + 2.0 * nnz * RANK
-                + rows * (double) RANK * RANK / 2;
+        // Cholesky: n_u·k²/2 rank-one updates + k³/6 factorisation (k³/3 flops) + k² triangular solves
+        // + n_u·k right-hand side, both half-steps, + Gram
+        double cholOps = 2.0 * nnz * RANK * RANK / 2 + rows * Math.pow(RANK, 3) / 6 + rows * (double) RANK * RANK
+                + 2.0 * nnz * RANK + rows * (double) RANK * RANK / 2;
         System.out.printf(Locale.ROOT, "multiply-adds per iteration: CG %.3g, Cholesky %.3g%n", cgOps, cholOps);
 
         BprConfig bprConfig = BprConfig.defaults().withRank(RANK).withEpochs(5).withThreads(THREADS);
