@@ -99,13 +99,20 @@ public final class AlsSideBySide {
         spark.stop();
 
         RankingEvaluation evaluation = new RankingEvaluation(new int[] {10}, 100, THREADS);
-        double ndcgCg = ndcg(evaluation, train, split, cgModel::scoreAll);
-        double ndcgChol = ndcg(evaluation, train, split, cholModel::scoreAll);
-        double ndcgSpark = ndcg(evaluation, train, split, (u, out) -> {
+        double[] perCg = perResearcher(evaluation, train, split, cgModel::scoreAll);
+        double ndcgCg = Arrays.stream(perCg).average().orElse(Double.NaN);
+        double ndcgChol = Arrays.stream(perResearcher(evaluation, train, split, cholModel::scoreAll)).average()
+                .orElse(Double.NaN);
+        double[] perSpark = perResearcher(evaluation, train, split, (u, out) -> {
             for (int i = 0; i < out.length; i++) {
                 out[i] = FactorMatrix.dot(sparkUsers, u, sparkItems, i);
             }
         });
+        double ndcgSpark = Arrays.stream(perSpark).average().orElse(Double.NaN);
+        org.congener.core.metrics.ConfidenceInterval gap =
+                org.congener.core.metrics.Bootstrap.meanDifferenceInterval(perCg, perSpark, 1000, 0.95, 5L);
+        System.out.printf(Locale.ROOT, "nDCG@10 CG − Spark: %+.4f, 95%% paired bootstrap [%+.4f, %+.4f]%n",
+                gap.mean(), gap.lower(), gap.upper());
         double minCg = min(tCg);
         double minChol = min(tChol);
         double minSpark = min(tSpark);
@@ -164,10 +171,10 @@ public final class AlsSideBySide {
         return out;
     }
 
-    private static double ndcg(RankingEvaluation evaluation, InteractionMatrix train, Split split,
-                               org.congener.core.metrics.ScoreFunction scorer) {
+    private static double[] perResearcher(RankingEvaluation evaluation, InteractionMatrix train, Split split,
+                                          org.congener.core.metrics.ScoreFunction scorer) {
         Map<String, double[]> values = evaluation.perResearcher(train.byUser(), split.test(), scorer);
-        return Arrays.stream(values.get("ndcg@10")).average().orElse(Double.NaN);
+        return values.get("ndcg@10");
     }
 
     private static double min(double[] v) {
