@@ -12,6 +12,8 @@ import picocli.CommandLine.Command;
         subcommands = {
                 CommandLine.HelpCommand.class,
                 EvaluateCommand.class,
+                SimilarityCommand.class,
+                OntologyStatsCommand.class,
         })
 public final class CongenerMain {
 
