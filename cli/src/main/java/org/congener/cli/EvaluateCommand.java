@@ -19,7 +19,6 @@ import org.congener.core.split.LeaveKOut;
 import org.congener.core.split.Splitter;
 import org.congener.core.split.TimeSplit;
 import org.congener.trainer.evaluation.CatalogFileReader;
-import org.congener.trainer.evaluation.EdgeListTaxonomy;
 import org.congener.trainer.evaluation.ExperimentReport;
 import org.congener.trainer.evaluation.ExperimentSettings;
 import org.congener.trainer.evaluation.InputFileException;
@@ -27,7 +26,14 @@ import org.congener.trainer.evaluation.InteractionFileReader;
 import org.congener.trainer.evaluation.OfflineExperiment;
 import org.congener.trainer.evaluation.Progress;
 import org.congener.trainer.evaluation.ReportWriter;
-import org.congener.trainer.evaluation.TaxonomyNeighbours;
+import org.congener.trainer.evaluation.OntologyNeighbours;
+import org.congener.core.ontology.Ontology;
+import org.congener.core.ontology.OntologyFormatException;
+import org.congener.core.ontology.io.EdgeListReader;
+import org.congener.core.ontology.io.OboReader;
+import java.io.InputStreamReader;
+import java.io.Reader;
+import java.nio.charset.StandardCharsets;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -58,11 +64,12 @@ public final class EvaluateCommand implements Callable<Integer> {
     private Path catalog;
 
     @Option(names = "--ontology", paramLabel = "FILE",
-            description = "the taxonomy; without it the semantic and fused models are left out")
+            description = "the ontology (OBO 1.4, or child<TAB>parent edges); without it the semantic and fused "
+                    + "models are left out (with --demo the demo ontology is the default)")
     private Path ontology;
 
     @Option(names = "--format", paramLabel = "obo|edges",
-            description = "ontology format (default: obo for *.obo files, else edges: child<TAB>parent lines)")
+            description = "ontology format, as for similarity (default: obo for *.obo files, else edges)")
     private String format;
 
     @Option(names = "--split", defaultValue = "time:0.2", paramLabel = "SPLIT",
@@ -124,10 +131,6 @@ public final class EvaluateCommand implements Callable<Integer> {
                 List<String> knownItems = terms == null ? List.of() : List.copyOf(terms.keySet());
                 log = InteractionFileReader.read(events, weights(), knownItems);
             }
-            if (demo && ontology == null) {
-                spec.commandLine().getErr().println("note: the demo ontology is OBO, which this build cannot read yet; "
-                        + "the semantic and fused models are left out");
-            }
             ExperimentSettings settings = ExperimentSettings.defaults(splitter, cutoffs)
                     .withIterations(iterations).withSeed(seed);
             if (threads > 0) {
@@ -139,8 +142,8 @@ public final class EvaluateCommand implements Callable<Integer> {
             }
             Map<String, Object> extra = new LinkedHashMap<>();
             NeighbourLists neighbours = null;
-            if (ontology != null) {
-                neighbours = neighbours(log, terms, settings.neighbours(), extra);
+            if (ontology != null || demo) {
+                neighbours = neighbours(log, terms, settings.neighbours(), settings.threads(), extra);
             }
             var err = spec.commandLine().getErr();
             err.printf("%d researchers, %d items, %d interactions%n", log.users().size(), log.items().size(),
@@ -205,25 +208,43 @@ public final class EvaluateCommand implements Callable<Integer> {
         return InteractionLog.fromEvents(usage, weights, latest, terms.keySet());
     }
 
-    private NeighbourLists neighbours(InteractionLog log, Map<String, List<String>> terms, int k,
+    private NeighbourLists neighbours(InteractionLog log, Map<String, List<String>> terms, int k, int threadCount,
                                       Map<String, Object> extra) {
-        String kind = format != null ? format : ontology.toString().endsWith(".obo") ? "obo" : "edges";
-        if (!Files.isRegularFile(ontology)) {
-            throw new InputFileException(ontology, 0, "no such file");
-        }
-        if (kind.equals("obo")) {
-            // the OBO reader belongs to the ontology module, which this build does not have yet
-            throw new InputFileException(ontology, 0, "--format obo is not available in this build yet; "
-                    + "give the is-a edges as child<TAB>parent lines with --format edges");
-        }
-        if (!kind.equals("edges")) {
-            throw new ParameterException(spec.commandLine(), "--format must be obo or edges, not '" + kind + "'");
-        }
-        EdgeListTaxonomy taxonomy = EdgeListTaxonomy.read(ontology);
-        TaxonomyNeighbours.Result result = TaxonomyNeighbours.build(taxonomy, log.items(), terms, k);
-        extra.put("ontologyTerms", taxonomy.termCount());
+        Ontology read = readOntology();
+        OntologyNeighbours.Result result = OntologyNeighbours.build(read, log.items(), terms, k, threadCount);
+        extra.put("ontologyTerms", read.termCount());
         extra.put("itemsWithoutTerms", result.itemsWithoutTerms());
+        extra.put("unknownTermIds", result.unknownTermIds());
         return result.neighbours();
+    }
+
+    /** The --ontology file in its format, or for --demo without --ontology the demo's own OBO file. */
+    private Ontology readOntology() {
+        try {
+            if (ontology == null) {
+                try (Reader reader = new InputStreamReader(DemoData.openOntology(), StandardCharsets.UTF_8)) {
+                    return new OboReader().read(reader);
+                }
+            }
+            String kind = format != null ? format : ontology.toString().endsWith(".obo") ? "obo" : "edges";
+            if (!Files.isRegularFile(ontology)) {
+                throw new InputFileException(ontology, 0, "no such file");
+            }
+            return switch (kind) {
+                case "obo" -> new OboReader().read(ontology);
+                case "edges" -> new EdgeListReader().read(ontology);
+                default -> throw new ParameterException(spec.commandLine(),
+                        "--format must be obo or edges, not '" + kind + "'");
+            };
+        } catch (OntologyFormatException e) {
+            throw new InputFileException(ontologySource(), 0, e.getMessage());
+        } catch (IOException e) {
+            throw new InputFileException(ontologySource(), 0, "cannot read: " + e.getMessage());
+        }
+    }
+
+    private Path ontologySource() {
+        return ontology != null ? ontology : Path.of("demo ontology.obo");
     }
 
     private int[] validKs() {

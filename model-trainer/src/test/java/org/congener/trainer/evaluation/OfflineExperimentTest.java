@@ -12,6 +12,7 @@ import org.congener.core.fusion.NeighbourLists;
 import org.congener.core.interactions.InteractionLog;
 import org.congener.core.interactions.InteractionWeights;
 import org.congener.core.split.TimeSplit;
+import org.congener.core.ontology.io.EdgeListReader;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -24,8 +25,8 @@ class OfflineExperimentTest {
         TaxonomyScenario.writeEdges(edges);
         TaxonomyScenario.writeInteractions(events, 150, 14, 5L);
         InteractionLog log = InteractionFileReader.read(events, InteractionWeights.defaults(), List.of());
-        EdgeListTaxonomy taxonomy = EdgeListTaxonomy.read(edges);
-        NeighbourLists neighbours = TaxonomyNeighbours.build(taxonomy, log.items(), null, 30).neighbours();
+        NeighbourLists neighbours = OntologyNeighbours.build(new EdgeListReader().read(edges), log.items(), null, 30, 2)
+                .neighbours();
         ExperimentSettings settings = ExperimentSettings.defaults(new TimeSplit(0.2), new int[] {1, 5, 10})
                 .withGrid(List.of(8), List.of(0.1), List.of(5.0)).withThreads(2);
         ExperimentReport report = new OfflineExperiment(settings, Progress.silent()).run(log, neighbours, java.util.Map.of());
@@ -98,21 +99,22 @@ class OfflineExperimentTest {
     }
 
     @Test
-    void shouldGiveLinOnIntrinsicInformationContentForTheEdgeList(@TempDir Path dir) throws Exception {
+    void shouldTurnTheOntologysNeighbourCacheIntoListsOverTheExperimentsItems(@TempDir Path dir) throws Exception {
         Path edges = dir.resolve("t.tsv");
-        // root ← a ← {x, y}; root ← b: 5 terms; hypo(a) = 2, hypo(root) = 4
+        // root ← a ← {x, y}; root ← b: 5 terms; hypo(a) = 2
         Files.write(edges, List.of("a\troot", "b\troot", "x\ta", "y\ta"));
-        EdgeListTaxonomy t = EdgeListTaxonomy.read(edges);
-        int x = t.indexOf("x");
-        int y = t.indexOf("y");
-        int b = t.indexOf("b");
-        // Seco et al. 2004: IC = 1 − ln(hypo + 1)/ln N; leaves 1, a: 1 − ln 3 / ln 5, root 0
+        org.congener.core.interactions.IdIndex items = new org.congener.core.interactions.IdIndex();
+        for (String id : List.of("x", "y", "b", "not-a-term")) {
+            items.indexOrAdd(id);
+        }
+        OntologyNeighbours.Result result = OntologyNeighbours.build(new EdgeListReader().read(edges), items, null, 5, 1);
+        // Lin on Seco et al. 2004 intrinsic IC: IC = 1 − ln(hypo + 1)/ln N; Lin(x, y) = 2·IC(a)/(IC(x) + IC(y))
+        // = IC(a) = 1 − ln 3 / ln 5 (leaves have IC 1); x and b share only the root (IC 0)
         double icA = 1 - Math.log(3) / Math.log(5);
-        assertEquals(icA, t.informationContent(t.indexOf("a")), 1e-12);
-        assertEquals(0.0, t.informationContent(t.indexOf("root")), 1e-12);
-        // Lin(x, y) = 2·IC(a)/(1 + 1); Lin(x, b) = 0 (only the root in common)
-        assertEquals(icA, t.lin(x, y), 1e-12);
-        assertEquals(0.0, t.lin(x, b), 1e-12);
+        assertEquals(icA, result.neighbours().similarity(0, 1), 1e-9);
+        assertEquals(0.0, result.neighbours().similarity(0, 2), 1e-12);
+        assertEquals(1, result.itemsWithoutTerms());
+        assertEquals(0, result.neighbours().neighbours(3).length);
     }
 
     private static double metric(ExperimentReport report, String model, String metric) {
