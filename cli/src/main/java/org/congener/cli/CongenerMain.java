@@ -13,6 +13,7 @@ import picocli.CommandLine.Command;
                 CommandLine.HelpCommand.class,
                 DemoCommand.class,
                 StreamsCommand.class,
+                EvaluateCommand.class,
                 SimilarityCommand.class,
                 OntologyStatsCommand.class,
         })

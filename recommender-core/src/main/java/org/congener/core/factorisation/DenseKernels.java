@@ -1,0 +1,46 @@
+package org.congener.core.factorisation;
+
+/**
+ * The few dense vector operations the solvers spend their time in. Two implementations: a plain
+ * scalar loop and one on the JDK's incubating Vector API; {@link #best()} picks the vector one
+ * when the module {@code jdk.incubator.vector} is present and falls back to scalar otherwise.
+ * Arrays are addressed with offsets so factor rows are used in place.
+ */
+public interface DenseKernels {
+
+    /** Σ_t a[aOff+t]·b[bOff+t] for t &lt; n. */
+    double dot(double[] a, int aOff, double[] b, int bOff, int n);
+
+    /** y[yOff+t] += alpha·x[xOff+t] for t &lt; n; modifies {@code y}. */
+    void axpy(double alpha, double[] x, int xOff, double[] y, int yOff, int n);
+
+    /** The plain-loop implementation. */
+    static DenseKernels scalar() {
+        return ScalarKernels.INSTANCE;
+    }
+
+    /** The Vector API implementation when available, else {@link #scalar()}. */
+    static DenseKernels best() {
+        return KernelChoice.BEST;
+    }
+
+    /** Lazy holder so a missing incubator module costs one failed class load, once. */
+    final class KernelChoice {
+        static final DenseKernels BEST = choose();
+
+        private KernelChoice() {
+        }
+
+        private static DenseKernels choose() {
+            if (Boolean.getBoolean("congener.scalarKernels")) {
+                return ScalarKernels.INSTANCE;
+            }
+            try {
+                Class<?> type = Class.forName("org.congener.core.factorisation.VectorKernels");
+                return (DenseKernels) type.getField("INSTANCE").get(null);
+            } catch (ReflectiveOperationException | LinkageError e) {
+                return ScalarKernels.INSTANCE;
+            }
+        }
+    }
+}
