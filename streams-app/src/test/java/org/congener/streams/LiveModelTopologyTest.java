@@ -219,4 +219,22 @@ class LiveModelTopologyTest {
         assertEquals(0.9, newcomer.semanticScore(), 1e-12);
         assertEquals("c-ethanol", newcomer.contributors().get(0).compoundId());
     }
+
+    @Test
+    void shouldOfferActiveAlternativesByOntologyAndCoUseButNeverTheCompoundItself() {
+        publish(version("v0001", FusionSettings.blend(0.5), 1));
+        LiveModel model = models.live();
+        java.util.Set<String> active = new java.util.HashSet<>(List.of("c-acetone", "c-ethanol", "c-precursor",
+                "c-toluene", "c-newcomer"));
+        org.congener.streams.model.Alternatives.Lists lists =
+                org.congener.streams.model.Alternatives.of(model, "c-ethanol", 3, active::contains);
+        assertEquals(List.of("c-newcomer", "c-acetone", "c-precursor"),
+                lists.byOntology().stream().map(org.congener.streams.model.Alternatives.Alternative::compoundId).toList());
+        assertFalse(lists.byCoUse().isEmpty());
+        for (org.congener.streams.model.Alternatives.Alternative a : lists.byCoUse()) {
+            assertFalse(a.compoundId().equals("c-ethanol") || a.compoundId().equals("c-retired")
+                    || a.compoundId().equals("c-newcomer"), "itself, inactive, or no factors: " + a);
+            assertTrue(a.similarity() <= 1.0 + 1e-12 && a.similarity() >= -1.0 - 1e-12);
+        }
+    }
 }
