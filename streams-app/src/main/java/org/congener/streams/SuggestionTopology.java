@@ -65,7 +65,11 @@ public final class SuggestionTopology {
     static final String BY_GROUP_REPARTITION = "usage-by-group";
 
     /** What the topology needs besides the builder. */
-    public record Settings(String topicPrefix, int topN, Duration popularityHalfLife) {
+    public record Settings(String topicPrefix, int topN, Duration popularityHalfLife, boolean inStockOnly) {
+        public Settings(String topicPrefix, int topN, Duration popularityHalfLife) {
+            this(topicPrefix, topN, popularityHalfLife, false);
+        }
+
         public Settings {
             if (topN < 1) {
                 throw new IllegalArgumentException("top-N must be at least 1, got " + topN);
@@ -76,7 +80,7 @@ public final class SuggestionTopology {
         }
 
         public static Settings from(AppConfig config) {
-            return new Settings(config.topicPrefix(), config.topN(), config.popularityHalfLife());
+            return new Settings(config.topicPrefix(), config.topN(), config.popularityHalfLife(), config.inStockOnly());
         }
 
     }
@@ -129,7 +133,7 @@ public final class SuggestionTopology {
                 .repartition(Repartitioned.with(usage.keySerde(), RecordSerdes.storeValue(TopicName.USAGE_EVENTS, UsageEvent.class))
                         .withName(BY_GROUP_REPARTITION))
                 .process(() -> new SuggestionProcessor(stores, scorer, models::live, InteractionWeights.defaults(),
-                        halfLifeMs, settings.topN()), INTERACTIONS_STORE, GROUP_POPULARITY_STORE)
+                        halfLifeMs, settings.topN(), settings.inStockOnly()), INTERACTIONS_STORE, GROUP_POPULARITY_STORE)
                 .to(suggestions.name(), Produced.with(suggestions.keySerde(), suggestions.valueSerde()));
 
         // this app wrote these lists a moment ago: read them back without a second schema check (a

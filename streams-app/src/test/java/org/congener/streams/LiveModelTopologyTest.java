@@ -74,10 +74,20 @@ class LiveModelTopologyTest {
     private TestOutputTopic<String, Suggestions> suggestions;
     private int sequence;
 
+    private TestInputTopic<String, org.congener.schemas.InventoryEvent> inventory;
+
     @BeforeEach
     void start() {
+        start(false);
+    }
+
+    private void start(boolean inStockOnly) {
+        if (driver != null) {
+            driver.close();
+        }
         StreamsBuilder builder = new StreamsBuilder();
-        models = SuggestionTopology.build(builder, new SuggestionTopology.Settings("lab.", 4, Duration.ofDays(30)));
+        models = SuggestionTopology.build(builder,
+                new SuggestionTopology.Settings("lab.", 4, Duration.ofDays(30), inStockOnly));
         Properties props = new Properties();
         props.put(StreamsConfig.APPLICATION_ID_CONFIG, "live-model-test");
         props.put(StreamsConfig.BOOTSTRAP_SERVERS_CONFIG, "unused:9092");
@@ -100,6 +110,8 @@ class LiveModelTopologyTest {
         manifests = driver.createInputTopic("lab.model-manifests", keys,
                 Fixtures.TOPICS.modelManifests().valueSerde().serializer());
         usage = driver.createInputTopic("lab.usage-events", keys, keys);
+        inventory = driver.createInputTopic("lab.inventory-events", keys,
+                Fixtures.TOPICS.inventoryEvents().valueSerde().serializer());
         suggestions = driver.createOutputTopic("lab.suggestions", new StringDeserializer(),
                 Fixtures.TOPICS.suggestions().valueSerde().deserializer());
     }
@@ -236,5 +248,16 @@ class LiveModelTopologyTest {
                     || a.compoundId().equals("c-newcomer"), "itself, inactive, or no factors: " + a);
             assertTrue(a.similarity() <= 1.0 + 1e-12 && a.similarity() >= -1.0 - 1e-12);
         }
+    }
+
+    @Test
+    void shouldSuggestOnlyCompoundsInStockWhenInStockOnlyIsSet() {
+        start(true);
+        publish(version("v0001", FusionSettings.blend(0.5), 1));
+        inventory.pipeInput("c-acetone", Fixtures.stock("c-acetone", 2));
+        inventory.pipeInput("c-toluene", Fixtures.stock("c-toluene", 0));
+        Suggestions s = send("ada", "c-ethanol", UsageKind.ORDER);
+        assertEquals(List.of("c-acetone"), ids(s), "only acetone has stock on hand");
+        assertTrue(s.items().get(0).inStock());
     }
 }

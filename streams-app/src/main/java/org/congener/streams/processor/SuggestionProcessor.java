@@ -48,6 +48,7 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
     private final java.util.function.Supplier<LiveModel> liveModel;
     private final double halfLifeMs;
     private final int topN;
+    private final boolean inStockOnly;
     private ProcessorContext<String, Suggestions> context;
     private KeyValueStore<String, InteractionProfile> interactions;
     private KeyValueStore<String, GroupPopularity> groups;
@@ -60,7 +61,8 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
      * @param coldStartWeights interaction weights before any version is live (a live version brings its own)
      */
     public SuggestionProcessor(Stores stores, SuggestionScorer scorer, java.util.function.Supplier<LiveModel> liveModel,
-                               InteractionWeights coldStartWeights, double halfLifeMs, int topN) {
+                               InteractionWeights coldStartWeights, double halfLifeMs, int topN, boolean inStockOnly) {
+        this.inStockOnly = inStockOnly;
         this.stores = stores;
         this.scorer = scorer;
         this.liveModel = liveModel;
@@ -106,6 +108,9 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         groups.put(researcher.groupId(), group);
 
         CandidateFilter eligible = CandidateFilter.forResearcher(researcher, profile, catalog::get);
+        if (inStockOnly) {
+            eligible = eligible.and(this::inStock);
+        }
         ScoringInput input = new ScoringInput(researcher, profile, group, at, eligible, model);
         List<ScoredCandidate> ranked = scorer.rank(input, topN);
         Suggestions suggestions = new Suggestions(SchemaIds.SUGGESTIONS, researcher.researcherId(),
@@ -119,12 +124,16 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         int rank = 1;
         for (ScoredCandidate c : ranked) {
             CatalogEntry entry = catalog.get(c.compoundId());
-            InventoryEvent lastStock = stock.get(c.compoundId());
-            boolean inStock = lastStock != null && lastStock.quantityOnHand() > 0;
             items.add(new Suggestion(rank++, c.compoundId(), entry.name(), c.cfScore(), c.semanticScore(),
-                    c.fusedScore(), c.contributors(), null, null, entry.hazardCodes(), inStock));
+                    c.fusedScore(), c.contributors(), null, null, entry.hazardCodes(), inStock(c.compoundId())));
         }
         return items;
+    }
+
+    /** Whether the compound's latest inventory event has quantity on hand above zero. */
+    private boolean inStock(String compoundId) {
+        InventoryEvent lastStock = stock.get(compoundId);
+        return lastStock != null && lastStock.quantityOnHand() > 0;
     }
 
     private static <T> T orNew(T value, java.util.function.Supplier<T> fresh) {
