@@ -26,6 +26,7 @@ import org.congener.streams.processor.UsageEventIntake;
 import org.congener.streams.scoring.GroupPopularityScorer;
 import org.congener.core.interactions.InteractionWeights;
 import org.congener.streams.model.ModelAssembler;
+import org.congener.streams.model.SharedTerms;
 import org.congener.streams.processor.ModelRecordProcessor;
 import org.congener.streams.scoring.HybridScorer;
 import org.congener.schemas.ItemFactors;
@@ -93,11 +94,22 @@ public final class SuggestionTopology {
      * before. Returns the instance's model assembler (its live snapshot is what events are scored under).
      */
     public static ModelAssembler build(StreamsBuilder builder, Settings settings) {
+        return build(builder, settings, (SharedTerms) null);
+    }
+
+    /** The same, naming in each suggestion the ontology class it shares with its top contributor. */
+    public static ModelAssembler build(StreamsBuilder builder, Settings settings, SharedTerms sharedTerms) {
         GroupPopularityScorer coldStart = new GroupPopularityScorer(settings.popularityHalfLife().toMillis());
-        return build(builder, settings, new HybridScorer(coldStart));
+        return build(builder, settings, new HybridScorer(coldStart), sharedTerms);
     }
 
     public static ModelAssembler build(StreamsBuilder builder, Settings settings, SuggestionScorer scorer) {
+        return build(builder, settings, scorer, null);
+    }
+
+    /** @param sharedTerms null: suggestions name no shared ontology class */
+    public static ModelAssembler build(StreamsBuilder builder, Settings settings, SuggestionScorer scorer,
+                                       SharedTerms sharedTerms) {
         Topics topics = new Topics(settings.topicPrefix());
         ModelAssembler models = new ModelAssembler();
         modelStore(builder, topics.modelItemFactors(), ITEM_FACTORS_STORE, models::onFactors);
@@ -133,7 +145,7 @@ public final class SuggestionTopology {
                 .repartition(Repartitioned.with(usage.keySerde(), RecordSerdes.storeValue(TopicName.USAGE_EVENTS, UsageEvent.class))
                         .withName(BY_GROUP_REPARTITION))
                 .process(() -> new SuggestionProcessor(stores, scorer, models::live, InteractionWeights.defaults(),
-                        halfLifeMs, settings.topN(), settings.inStockOnly()), INTERACTIONS_STORE, GROUP_POPULARITY_STORE)
+                        halfLifeMs, settings.topN(), settings.inStockOnly(), sharedTerms), INTERACTIONS_STORE, GROUP_POPULARITY_STORE)
                 .to(suggestions.name(), Produced.with(suggestions.keySerde(), suggestions.valueSerde()));
 
         // this app wrote these lists a moment ago: read them back without a second schema check (a

@@ -82,12 +82,16 @@ class LiveModelTopologyTest {
     }
 
     private void start(boolean inStockOnly) {
+        start(inStockOnly, null);
+    }
+
+    private void start(boolean inStockOnly, org.congener.streams.model.SharedTerms sharedTerms) {
         if (driver != null) {
             driver.close();
         }
         StreamsBuilder builder = new StreamsBuilder();
         models = SuggestionTopology.build(builder,
-                new SuggestionTopology.Settings("lab.", 4, Duration.ofDays(30), inStockOnly));
+                new SuggestionTopology.Settings("lab.", 4, Duration.ofDays(30), inStockOnly), sharedTerms);
         Properties props = new Properties();
         props.put(StreamsConfig.APPLICATION_ID_CONFIG, "live-model-test");
         props.put(StreamsConfig.BOOTSTRAP_SERVERS_CONFIG, "unused:9092");
@@ -259,5 +263,30 @@ class LiveModelTopologyTest {
         Suggestions s = send("ada", "c-ethanol", UsageKind.ORDER);
         assertEquals(List.of("c-acetone"), ids(s), "only acetone has stock on hand");
         assertTrue(s.items().get(0).inStock());
+    }
+
+    /** A small invented taxonomy over the fixture's compound terms. */
+    private static final String OBO = String.join("\n",
+            "format-version: 1.4", "",
+            "[Term]", "id: T:root", "name: compound", "",
+            "[Term]", "id: T:solvent", "name: organic solvent", "is_a: T:root", "",
+            "[Term]", "id: T:alcohol", "name: alcohol", "is_a: T:solvent", "",
+            "[Term]", "id: term:c-ethanol", "name: ethanol", "is_a: T:alcohol", "",
+            "[Term]", "id: term:c-newcomer", "name: newcomer", "is_a: T:alcohol", "",
+            "[Term]", "id: term:c-acetone", "name: acetone", "is_a: T:solvent", "");
+
+    @Test
+    void shouldNameTheMostInformativeSharedClassWhenAnOntologyIsGiven() throws Exception {
+        org.congener.core.ontology.Ontology ontology =
+                new org.congener.core.ontology.io.OboReader().read(new java.io.StringReader(OBO));
+        start(false, new org.congener.streams.model.SharedTerms(ontology));
+        publish(version("v0001", FusionSettings.blend(0.5), 1));
+        Suggestions s = send("ada", "c-ethanol", UsageKind.ORDER);
+        Map<String, Suggestion> byId = new java.util.HashMap<>();
+        s.items().forEach(i -> byId.put(i.compoundId(), i));
+        assertEquals("T:alcohol", byId.get("c-newcomer").sharedTermId());
+        assertEquals("alcohol", byId.get("c-newcomer").sharedTermName());
+        assertEquals("T:solvent", byId.get("c-acetone").sharedTermId());
+        assertEquals("organic solvent", byId.get("c-acetone").sharedTermName());
     }
 }

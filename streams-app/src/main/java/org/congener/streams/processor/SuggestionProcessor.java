@@ -18,6 +18,7 @@ import org.congener.schemas.UsageEvent;
 import org.congener.schemas.UsageKind;
 import org.congener.core.interactions.InteractionWeights;
 import org.congener.streams.model.LiveModel;
+import org.congener.streams.model.SharedTerms;
 import org.congener.streams.SafetyCaution;
 import org.congener.streams.scoring.CandidateFilter;
 import org.congener.streams.scoring.ScoredCandidate;
@@ -49,6 +50,7 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
     private final double halfLifeMs;
     private final int topN;
     private final boolean inStockOnly;
+    private final SharedTerms sharedTerms;
     private ProcessorContext<String, Suggestions> context;
     private KeyValueStore<String, InteractionProfile> interactions;
     private KeyValueStore<String, GroupPopularity> groups;
@@ -61,8 +63,9 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
      * @param coldStartWeights interaction weights before any version is live (a live version brings its own)
      */
     public SuggestionProcessor(Stores stores, SuggestionScorer scorer, java.util.function.Supplier<LiveModel> liveModel,
-                               InteractionWeights coldStartWeights, double halfLifeMs, int topN, boolean inStockOnly) {
+                               InteractionWeights coldStartWeights, double halfLifeMs, int topN, boolean inStockOnly, SharedTerms sharedTerms) {
         this.inStockOnly = inStockOnly;
+        this.sharedTerms = sharedTerms;
         this.stores = stores;
         this.scorer = scorer;
         this.liveModel = liveModel;
@@ -124,10 +127,24 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         int rank = 1;
         for (ScoredCandidate c : ranked) {
             CatalogEntry entry = catalog.get(c.compoundId());
+            SharedTerms.Term shared = sharedTerm(entry, c);
             items.add(new Suggestion(rank++, c.compoundId(), entry.name(), c.cfScore(), c.semanticScore(),
-                    c.fusedScore(), c.contributors(), null, null, entry.hazardCodes(), inStock(c.compoundId())));
+                    c.fusedScore(), c.contributors(), shared == null ? null : shared.id(),
+                    shared == null ? null : shared.name(), entry.hazardCodes(), inStock(c.compoundId())));
         }
         return items;
+    }
+
+    /** The most informative class the suggestion shares with its top contributor, or null. */
+    private SharedTerms.Term sharedTerm(CatalogEntry suggested, ScoredCandidate candidate) {
+        if (sharedTerms == null || candidate.contributors().isEmpty()) {
+            return null;
+        }
+        CatalogEntry past = catalog.get(candidate.contributors().get(0).compoundId());
+        if (past == null) {
+            return null;
+        }
+        return sharedTerms.mostInformativeShared(suggested.termIds(), past.termIds()).orElse(null);
     }
 
     /** Whether the compound's latest inventory event has quantity on hand above zero. */
