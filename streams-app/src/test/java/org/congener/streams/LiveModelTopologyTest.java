@@ -289,4 +289,20 @@ class LiveModelTopologyTest {
         assertEquals("T:solvent", byId.get("c-acetone").sharedTermId());
         assertEquals("organic solvent", byId.get("c-acetone").sharedTermName());
     }
+
+    @Test
+    void shouldSkipAnUnreadableFactorRecordAndKeepTheVersionOffUntilItsRecordIsWhole() {
+        ModelVersions.Version v1 = version("v0001", FusionSettings.blend(0.5), 1);
+        TestInputTopic<String, String> rawFactors = driver.createInputTopic("lab.model-item-factors",
+                new StringSerializer(), new StringSerializer());
+        v1.factors().stream().skip(1).forEach(f -> factors.pipeInput(ModelVersions.Version.key("v0001", f.compoundId()), f));
+        String first = ModelVersions.Version.key("v0001", v1.factors().get(0).compoundId());
+        rawFactors.pipeInput(first, "{\"schema\": 42");
+        v1.neighbours().forEach(n -> neighbours.pipeInput(ModelVersions.Version.key("v0001", n.compoundId()), n));
+        manifests.pipeInput(ModelAssembler.CURRENT_KEY, v1.manifest());
+        assertNull(send("ada", "c-ethanol", UsageKind.ORDER).modelVersion(), "one factor record is unreadable");
+
+        factors.pipeInput(first, v1.factors().get(0));
+        assertEquals("v0001", send("ada", "c-ethanol", UsageKind.VIEW).modelVersion());
+    }
 }
