@@ -11,6 +11,9 @@ import org.apache.kafka.streams.KafkaStreams;
 import org.apache.kafka.streams.StreamsBuilder;
 import org.apache.kafka.streams.StreamsConfig;
 import org.apache.kafka.streams.Topology;
+import org.congener.core.ontology.io.OboReader;
+import org.congener.streams.model.ModelAssembler;
+import org.congener.streams.model.SharedTerms;
 import org.apache.kafka.streams.errors.StreamsUncaughtExceptionHandler;
 import org.apache.kafka.streams.state.HostInfo;
 import org.congener.streams.api.QueryServer;
@@ -39,7 +42,8 @@ public final class StreamsApp implements AutoCloseable {
     /** Starts Kafka Streams and the query API; returns without waiting for RUNNING. */
     public static StreamsApp start(AppConfig config) {
         StreamsBuilder builder = new StreamsBuilder();
-        SuggestionTopology.build(builder, SuggestionTopology.Settings.from(config));
+        ModelAssembler models = SuggestionTopology.build(builder, SuggestionTopology.Settings.from(config),
+                sharedTerms(config));
         Topology topology = builder.build();
         // open the port first: a taken port fails before Kafka Streams starts anything, and port 0
         // is bound to a real port that can go into application.server
@@ -61,7 +65,7 @@ public final class StreamsApp implements AutoCloseable {
             LOG.error("stream thread failed; replacing it", exception);
             return StreamsUncaughtExceptionHandler.StreamThreadExceptionResponse.REPLACE_THREAD;
         });
-        queries.attach(streams, HostInfo.buildFromEndpoint(advertised), () -> deadLetters(streams));
+        queries.attach(streams, HostInfo.buildFromEndpoint(advertised), () -> deadLetters(streams), models);
         try {
             streams.start();
         } catch (RuntimeException e) {
@@ -70,6 +74,19 @@ public final class StreamsApp implements AutoCloseable {
             throw e;
         }
         return new StreamsApp(streams, server);
+    }
+
+    /** The ontology of {@code ontology.file} for the "why" of suggestions, or null when none is set. */
+    private static SharedTerms sharedTerms(AppConfig config) {
+        java.nio.file.Path file = config.ontologyFile();
+        if (file == null) {
+            return null;
+        }
+        try {
+            return new SharedTerms(new OboReader().read(file));
+        } catch (java.io.IOException e) {
+            throw new IllegalStateException("cannot read the ontology file " + file + ": " + e.getMessage(), e);
+        }
     }
 
     /** Waits until Kafka Streams is RUNNING; false when the timeout passed first or it failed. */

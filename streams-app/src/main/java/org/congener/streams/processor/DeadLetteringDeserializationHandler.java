@@ -23,9 +23,11 @@ import org.slf4j.LoggerFactory;
  * Congener's format to write to {@code dead-letters}, and carries on. Usage events never get here:
  * they are read as raw bytes by {@link UsageEventIntake}.
  *
- * <p>For the topics behind global tables (catalogue, researchers, stock) the log line is all that
+ * <p>For the topics behind global tables and stores (catalogue, researchers, stock, the three model
+ * topics) the log line is all that
  * remains: Kafka Streams 4.4 cannot write records handed back from its global thread (it fails with a
- * ClassCastException and the whole client stops), so the handler hands back none there.
+ * ClassCastException and the whole client stops), so the handler hands back none there. A skipped
+ * model record leaves its version short of records, so that version never goes live.
  */
 public final class DeadLetteringDeserializationHandler implements DeserializationExceptionHandler {
 
@@ -46,7 +48,8 @@ public final class DeadLetteringDeserializationHandler implements Deserializatio
     }
 
     private static Set<String> globalTableTopics(Topics topics) {
-        return Set.of(topics.catalog().name(), topics.researchers().name(), topics.inventoryEvents().name());
+        return Set.of(topics.catalog().name(), topics.researchers().name(), topics.inventoryEvents().name(),
+                topics.modelItemFactors().name(), topics.itemNeighbours().name(), topics.modelManifests().name());
     }
 
     @Override
