@@ -39,7 +39,13 @@ final class TrainerFixture {
 
     final Topics topics;
     final String bootstrap = SharedBroker.bootstrapServers();
-    final List<String> log = new ArrayList<>();
+    final List<String> log = java.util.Collections.synchronizedList(new ArrayList<>() {
+        @Override
+        public boolean add(String s) {
+            System.err.println(java.time.LocalTime.now() + " " + s);
+            return super.add(s);
+        }
+    });
 
     TrainerFixture(String testName) {
         this.topics = new Topics(SharedBroker.uniquePrefix(testName));
