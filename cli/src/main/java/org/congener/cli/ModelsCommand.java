@@ -1,28 +1,34 @@
 package org.congener.cli;
 
-import java.io.PrintStream;
+import java.io.PrintWriter;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.congener.schemas.ModelManifest;
 import org.congener.trainer.registry.PublishedModels;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Spec;
 
 /** {@code congener models}: the published model versions, their held-out metrics and which is live. */
 @Command(name = "models", mixinStandardHelpOptions = true,
         description = "Lists the model versions on the broker with their offline metrics; * marks the live one.")
 public final class ModelsCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
     @Mixin
     TrainerConnection connection;
 
     @Override
     public Integer call() {
-        PublishedModels models = connection.registry(line -> System.err.println("models: " + line)).read();
-        print(models, System.out);
+        PrintWriter err = spec.commandLine().getErr();
+        PublishedModels models = connection.registry(line -> err.println("models: " + line)).read();
+        print(models, spec.commandLine().getOut());
         return 0;
     }
 
-    static void print(PublishedModels models, PrintStream out) {
+    static void print(PublishedModels models, PrintWriter out) {
         if (models.versions().isEmpty()) {
             out.println("no model version is published");
             return;
@@ -39,6 +45,7 @@ public final class ModelsCommand implements Callable<Integer> {
         if (models.liveVersion() == null) {
             out.println("no version is live");
         }
+        out.flush();
     }
 
     private static String metric(ModelManifest m, String name) {

@@ -32,12 +32,12 @@ public final class RollbackCommand implements Callable<Integer> {
         if (!VersionNames.isVersion(version)) {
             throw new ParameterException(spec.commandLine(), "--to '" + version + "' is no version name (v0001, v0002, …)");
         }
-        PublishedModels models = connection.registry(line -> System.err.println("rollback: " + line)).read();
+        PublishedModels models = connection.registry(line -> spec.commandLine().getErr().println("rollback: " + line)).read();
         try (ModelPublisher publisher = new ModelPublisher(connection.bootstrapServers, connection.topics(),
                 PublishHook.NONE)) {
             String before = models.liveVersion();
             ModelManifest live = Rollback.to(version, models, publisher);
-            System.out.println("live version: " + live.version() + " (was " + (before == null ? "none" : before) + ")");
+            spec.commandLine().getOut().println("live version: " + live.version() + " (was " + (before == null ? "none" : before) + ")");
             return 0;
         } catch (IllegalArgumentException | IllegalStateException e) {
             spec.commandLine().getErr().println("congener rollback: " + e.getMessage());

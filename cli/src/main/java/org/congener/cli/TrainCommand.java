@@ -1,7 +1,6 @@
 package org.congener.cli;
 
 import java.io.InputStreamReader;
-import java.io.PrintStream;
 import java.io.Reader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
@@ -104,17 +103,21 @@ public final class TrainCommand implements Callable<Integer> {
             }
         }
         TrainerSettings settings = settings(metric, margin, keep, reportDir, threads, iterations, ranks);
-        PrintStream out = System.out;
+        java.io.PrintWriter out = spec.commandLine().getOut();
+        java.io.PrintWriter err = spec.commandLine().getErr();
         TrainerService service = new TrainerService(connection.bootstrapServers, connection.topics(), settings, read,
-                line -> System.err.println("trainer: " + line), System.err, PublishHook.NONE);
+                line -> err.println("trainer: " + line), System.err, PublishHook.NONE);
         AtomicBoolean stop = new AtomicBoolean();
         AtomicInteger failures = new AtomicInteger();
         Thread hook = new Thread(() -> stop.set(true), "train-stop");
         Runtime.getRuntime().addShutdownHook(hook);
         try {
-            TrainingSchedule.loop(plan, service::runOnce, o -> out.print(TrainingSummary.render(o)), e -> {
+            TrainingSchedule.loop(plan, service::runOnce, o -> {
+                out.print(TrainingSummary.render(o));
+                out.flush();
+            }, e -> {
                 failures.incrementAndGet();
-                System.err.println("congener train: " + e.getMessage());
+                err.println("congener train: " + e.getMessage());
             }, stop::get, () -> TrainingSchedule.endOffsetSum(connection.bootstrapServers,
                     connection.topics().usageEvents().name(), connection.readTimeout()));
         } finally {

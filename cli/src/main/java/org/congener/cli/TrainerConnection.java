@@ -12,8 +12,8 @@ final class TrainerConnection {
             description = "Kafka brokers to read the history from and publish to")
     String bootstrapServers;
 
-    @Option(names = "--topic-prefix", paramLabel = "PREFIX", defaultValue = "",
-            description = "prefix of every topic name (default: none)")
+    @Option(names = "--topic-prefix", paramLabel = "PREFIX", defaultValue = "${env:CONGENER_TOPIC_PREFIX:-}",
+            description = "prefix of every topic name (default: CONGENER_TOPIC_PREFIX, else none)")
     String topicPrefix;
 
     @Option(names = "--read-timeout", paramLabel = "SECONDS", defaultValue = "120",
