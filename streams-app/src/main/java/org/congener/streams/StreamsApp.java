@@ -11,6 +11,7 @@ import org.apache.kafka.streams.KafkaStreams;
 import org.apache.kafka.streams.StreamsBuilder;
 import org.apache.kafka.streams.StreamsConfig;
 import org.apache.kafka.streams.Topology;
+import org.congener.streams.model.ModelAssembler;
 import org.apache.kafka.streams.errors.StreamsUncaughtExceptionHandler;
 import org.apache.kafka.streams.state.HostInfo;
 import org.congener.streams.api.QueryServer;
@@ -39,7 +40,7 @@ public final class StreamsApp implements AutoCloseable {
     /** Starts Kafka Streams and the query API; returns without waiting for RUNNING. */
     public static StreamsApp start(AppConfig config) {
         StreamsBuilder builder = new StreamsBuilder();
-        SuggestionTopology.build(builder, SuggestionTopology.Settings.from(config));
+        ModelAssembler models = SuggestionTopology.build(builder, SuggestionTopology.Settings.from(config));
         Topology topology = builder.build();
         // open the port first: a taken port fails before Kafka Streams starts anything, and port 0
         // is bound to a real port that can go into application.server
@@ -61,7 +62,7 @@ public final class StreamsApp implements AutoCloseable {
             LOG.error("stream thread failed; replacing it", exception);
             return StreamsUncaughtExceptionHandler.StreamThreadExceptionResponse.REPLACE_THREAD;
         });
-        queries.attach(streams, HostInfo.buildFromEndpoint(advertised), () -> deadLetters(streams));
+        queries.attach(streams, HostInfo.buildFromEndpoint(advertised), () -> deadLetters(streams), models);
         try {
             streams.start();
         } catch (RuntimeException e) {

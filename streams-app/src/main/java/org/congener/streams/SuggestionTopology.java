@@ -24,7 +24,13 @@ import org.congener.streams.processor.Intake;
 import org.congener.streams.processor.SuggestionProcessor;
 import org.congener.streams.processor.UsageEventIntake;
 import org.congener.streams.scoring.GroupPopularityScorer;
-import org.congener.streams.scoring.InteractionWeights;
+import org.congener.core.interactions.InteractionWeights;
+import org.congener.streams.model.ModelAssembler;
+import org.congener.streams.processor.ModelRecordProcessor;
+import org.congener.streams.scoring.HybridScorer;
+import org.congener.schemas.ItemFactors;
+import org.congener.schemas.ItemNeighbours;
+import org.congener.schemas.ModelManifest;
 import org.congener.streams.scoring.SuggestionScorer;
 import org.congener.streams.serde.RecordSerdes;
 import org.congener.streams.state.GroupPopularitySerde;
@@ -38,6 +44,7 @@ import org.congener.streams.state.InteractionProfileSerde;
  *                                      └─ accepted, re-keyed by group ─▶ repartition
  *     ─▶ suggest [researcher-interactions, group-popularity] ─▶ suggestions ─▶ latest-suggestions (table)
  * catalog, researchers, inventory-events ─▶ global tables read by intake and suggest
+ * model-item-factors, item-neighbours, model-manifests ─▶ global stores ─▶ model assembler ─▶ live snapshot
  * </pre>
  *
  * Events are repartitioned by research group so that one task holds all of a group's members and the
@@ -52,10 +59,17 @@ public final class SuggestionTopology {
     public static final String CATALOG_STORE = "catalog-table";
     public static final String RESEARCHERS_STORE = "researchers-table";
     public static final String STOCK_STORE = "stock-table";
+    public static final String ITEM_FACTORS_STORE = "model-item-factors-store";
+    public static final String NEIGHBOURS_STORE = "item-neighbours-store";
+    public static final String MANIFESTS_STORE = "model-manifests-store";
     static final String BY_GROUP_REPARTITION = "usage-by-group";
 
     /** What the topology needs besides the builder. */
-    public record Settings(String topicPrefix, int topN, Duration popularityHalfLife) {
+    public record Settings(String topicPrefix, int topN, Duration popularityHalfLife, boolean inStockOnly) {
+        public Settings(String topicPrefix, int topN, Duration popularityHalfLife) {
+            this(topicPrefix, topN, popularityHalfLife, false);
+        }
+
         public Settings {
             if (topN < 1) {
                 throw new IllegalArgumentException("top-N must be at least 1, got " + topN);
@@ -66,7 +80,7 @@ public final class SuggestionTopology {
         }
 
         public static Settings from(AppConfig config) {
-            return new Settings(config.topicPrefix(), config.topN(), config.popularityHalfLife());
+            return new Settings(config.topicPrefix(), config.topN(), config.popularityHalfLife(), config.inStockOnly());
         }
 
     }
@@ -74,13 +88,21 @@ public final class SuggestionTopology {
     private SuggestionTopology() {
     }
 
-    /** The topology with the baseline scorer (group popularity). */
-    public static void build(StreamsBuilder builder, Settings settings) {
-        build(builder, settings, new GroupPopularityScorer(settings.popularityHalfLife().toMillis()));
+    /**
+     * The topology with the hybrid scorer: live model versions once one is complete, group popularity
+     * before. Returns the instance's model assembler (its live snapshot is what events are scored under).
+     */
+    public static ModelAssembler build(StreamsBuilder builder, Settings settings) {
+        GroupPopularityScorer coldStart = new GroupPopularityScorer(settings.popularityHalfLife().toMillis());
+        return build(builder, settings, new HybridScorer(coldStart));
     }
 
-    public static void build(StreamsBuilder builder, Settings settings, SuggestionScorer scorer) {
+    public static ModelAssembler build(StreamsBuilder builder, Settings settings, SuggestionScorer scorer) {
         Topics topics = new Topics(settings.topicPrefix());
+        ModelAssembler models = new ModelAssembler();
+        modelStore(builder, topics.modelItemFactors(), ITEM_FACTORS_STORE, models::onFactors);
+        modelStore(builder, topics.itemNeighbours(), NEIGHBOURS_STORE, models::onNeighbours);
+        modelStore(builder, topics.modelManifests(), MANIFESTS_STORE, models::onManifest);
         globalTable(builder, topics.catalog(), CATALOG_STORE);
         globalTable(builder, topics.researchers(), RESEARCHERS_STORE);
         // the latest stock event per compound; "in stock" means its quantity on hand is above zero
@@ -110,8 +132,8 @@ public final class SuggestionTopology {
                 // values on the internal topic were validated a moment ago: no second validation
                 .repartition(Repartitioned.with(usage.keySerde(), RecordSerdes.storeValue(TopicName.USAGE_EVENTS, UsageEvent.class))
                         .withName(BY_GROUP_REPARTITION))
-                .process(() -> new SuggestionProcessor(stores, scorer, InteractionWeights.defaults(), halfLifeMs,
-                        settings.topN()), INTERACTIONS_STORE, GROUP_POPULARITY_STORE)
+                .process(() -> new SuggestionProcessor(stores, scorer, models::live, InteractionWeights.defaults(),
+                        halfLifeMs, settings.topN(), settings.inStockOnly()), INTERACTIONS_STORE, GROUP_POPULARITY_STORE)
                 .to(suggestions.name(), Produced.with(suggestions.keySerde(), suggestions.valueSerde()));
 
         // this app wrote these lists a moment ago: read them back without a second schema check (a
@@ -122,6 +144,22 @@ public final class SuggestionTopology {
                 Materialized.<String, Suggestions, KeyValueStore<Bytes, byte[]>>as(LATEST_SUGGESTIONS_STORE)
                         .withKeySerde(suggestions.keySerde())
                         .withValueSerde(ownLists));
+        return models;
+    }
+
+    /**
+     * A global store over one model topic whose processor also hands every record to the assembler;
+     * on start the processor replays the restored store into it (restoration bypasses processors).
+     */
+    @SuppressWarnings("unchecked")
+    private static <V> void modelStore(StreamsBuilder builder, Topic<V> topic, String storeName,
+                                       java.util.function.BiConsumer<String, V> sink) {
+        Class<V> type = (Class<V>) topic.id().valueType();
+        builder.addGlobalStore(
+                Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(storeName), topic.keySerde(),
+                        RecordSerdes.storeValue(topic.id(), type)).withLoggingDisabled(),
+                topic.name(), Consumed.with(topic.keySerde(), topic.valueSerde()),
+                () -> new ModelRecordProcessor<>(storeName, sink));
     }
 
     /** A global table over a compacted topic: validated when read from the topic, stored as the topic's JSON. */

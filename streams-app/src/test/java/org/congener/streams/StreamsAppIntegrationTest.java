@@ -152,6 +152,117 @@ class StreamsAppIntegrationTest {
         }
     }
 
+    @Test
+    void shouldStreamTheBatchTopNUnderAPublishedVersionAndNeverBreakAnAuthorisation() throws Exception {
+        String prefix = SharedBroker.uniquePrefix("live-model");
+        String bootstrap = SharedBroker.bootstrapServers();
+        prepareTopics(bootstrap, prefix);
+        List<String> compounds = List.of("c-acetone", "c-ethanol", "c-precursor", "c-retired", "c-toluene");
+        ModelVersions.Version v1 = ModelVersions.train("v0001", compounds, List.of(
+                        new ModelVersions.Use("u1", "c-ethanol", 2), new ModelVersions.Use("u1", "c-acetone", 1),
+                        new ModelVersions.Use("u2", "c-toluene", 2), new ModelVersions.Use("u2", "c-precursor", 1),
+                        new ModelVersions.Use("u3", "c-precursor", 1), new ModelVersions.Use("u3", "c-ethanol", 1)),
+                Map.of("c-ethanol", ModelVersions.list("c-precursor", 0.6, "c-acetone", 0.5),
+                        "c-acetone", ModelVersions.list("c-ethanol", 0.5, "c-toluene", 0.2),
+                        "c-toluene", ModelVersions.list("c-precursor", 0.4),
+                        "c-precursor", ModelVersions.list("c-ethanol", 0.6, "c-toluene", 0.4)),
+                org.congener.core.fusion.FusionSettings.blend(0.5), 2, 5L);
+        publishTransactionally(bootstrap, prefix, v1);
+
+        String[][] script = {
+                {"ada", "c-ethanol", "ORDER"}, {"cyd", "c-ethanol", "ORDER"}, {"ben", "c-toluene", "WITHDRAWAL"},
+                {"cyd", "c-toluene", "VIEW"}, {"ada", "c-toluene", "USAGE_LOG"}, {"dee", "c-acetone", "ORDER"},
+                {"cyd", "c-acetone", "ORDER"}, {"ben", "c-ethanol", "ORDER"}, {"ada", "c-acetone", "VIEW"}};
+        try (StreamsApp app = StreamsApp.start(config(bootstrap, prefix, SharedBroker.uniqueApplicationId("live-model"),
+                stateDir.resolve("live")))) {
+            assertTrue(app.awaitRunning(WAIT), "streams app reached RUNNING");
+            try (KafkaProducer<String, String> producer = producer(bootstrap)) {
+                for (int i = 0; i < script.length; i++) {
+                    UsageEvent event = Fixtures.event("m" + i, script[i][0], script[i][1], UsageKind.valueOf(script[i][2]),
+                            "2026-01-05T10:00:0" + i + "Z");
+                    producer.send(new ProducerRecord<>(TopicName.USAGE_EVENTS.withPrefix(prefix), script[i][0],
+                            Fixtures.json(event)));
+                }
+            }
+            List<Suggestions> out = readAll(bootstrap, TopicName.SUGGESTIONS.withPrefix(prefix),
+                    Fixtures.TOPICS.suggestions().valueSerde().deserializer(), script.length);
+            assertEquals(script.length, out.size());
+
+            org.congener.streams.model.LiveModel model = org.congener.streams.model.LiveModel.assemble(
+                    v1.manifest(), v1.factors(), v1.neighbours());
+            Map<String, org.congener.schemas.Researcher> researchers = new java.util.HashMap<>();
+            Fixtures.researchers().forEach(r -> researchers.put(r.researcherId(), r));
+            Map<String, org.congener.schemas.CatalogEntry> catalog = new java.util.HashMap<>();
+            Fixtures.catalog().forEach(c -> catalog.put(c.compoundId(), c));
+            for (Suggestions s : out) {
+                assertEquals("v0001", s.modelVersion());
+                assertEquals(org.congener.schemas.SuggestionSource.HYBRID, s.source());
+                for (var item : s.items()) {
+                    assertTrue(researchers.get(s.researcherId()).authorisations()
+                            .containsAll(catalog.get(item.compoundId()).restrictionTags()),
+                            s.researcherId() + " got " + item.compoundId());
+                }
+            }
+            for (String researcher : List.of("ada", "ben", "cyd", "dee")) {
+                // the batch top-N from the same events, the same version and the same core code
+                java.util.LinkedHashMap<String, Float> strengths = new java.util.LinkedHashMap<>();
+                java.util.Set<String> used = new java.util.HashSet<>();
+                String last = null;
+                for (int i = 0; i < script.length; i++) {
+                    if (script[i][0].equals(researcher)) {
+                        UsageKind kind = UsageKind.valueOf(script[i][2]);
+                        float w = (float) model.settings().weights().contribution(kind, kind == UsageKind.VIEW ? 0 : 1.0,
+                                java.time.Instant.EPOCH, java.time.Instant.EPOCH);
+                        strengths.merge(script[i][1], w, Float::sum);
+                        if (kind != UsageKind.VIEW) {
+                            used.add(script[i][1]);
+                        }
+                        last = "m" + i;
+                    }
+                }
+                int[] items = strengths.keySet().stream().mapToInt(model::indexOf).toArray();
+                double[] values = strengths.values().stream().mapToDouble(Float::doubleValue).toArray();
+                var scores = org.congener.core.fusion.OneResearcherScoring.score(model.foldIn(), model.itemFactors(),
+                        model.neighbours(), model.settings().fusion(), items, values);
+                var who = researchers.get(researcher);
+                int[] top = org.congener.core.fusion.OneResearcherScoring.topN(scores.fused(), 3, i -> {
+                    var entry = catalog.get(model.compoundId(i));
+                    return entry != null && entry.active() && who.authorisations().containsAll(entry.restrictionTags())
+                            && !used.contains(entry.compoundId());
+                });
+                List<String> batch = java.util.Arrays.stream(top).mapToObj(model::compoundId).toList();
+                String lastEvent = last;
+                Suggestions streamed = out.stream().filter(s -> lastEvent.equals(s.causedByEventId())).findFirst().orElseThrow();
+                assertEquals(batch, streamed.items().stream().map(i -> i.compoundId()).toList(), researcher);
+            }
+        }
+    }
+
+    /** One transaction, as the model-version contract says: factors, neighbours, manifest, current. */
+    private static void publishTransactionally(String bootstrap, String prefix, ModelVersions.Version v) {
+        Properties p = new Properties();
+        p.put(ProducerConfig.BOOTSTRAP_SERVERS_CONFIG, bootstrap);
+        p.put(ProducerConfig.TRANSACTIONAL_ID_CONFIG, prefix + "publisher");
+        try (KafkaProducer<String, String> producer = new KafkaProducer<>(p, new StringSerializer(), new StringSerializer())) {
+            producer.initTransactions();
+            producer.beginTransaction();
+            for (var f : v.factors()) {
+                producer.send(new ProducerRecord<>(TopicName.MODEL_ITEM_FACTORS.withPrefix(prefix),
+                        ModelVersions.Version.key(v.name(), f.compoundId()),
+                        text(Fixtures.TOPICS.modelItemFactors().valueSerde().serializer().serialize("", f))));
+            }
+            for (var n : v.neighbours()) {
+                producer.send(new ProducerRecord<>(TopicName.ITEM_NEIGHBOURS.withPrefix(prefix),
+                        ModelVersions.Version.key(v.name(), n.compoundId()),
+                        text(Fixtures.TOPICS.itemNeighbours().valueSerde().serializer().serialize("", n))));
+            }
+            String manifest = text(Fixtures.TOPICS.modelManifests().valueSerde().serializer().serialize("", v.manifest()));
+            producer.send(new ProducerRecord<>(TopicName.MODEL_MANIFESTS.withPrefix(prefix), v.name(), manifest));
+            producer.send(new ProducerRecord<>(TopicName.MODEL_MANIFESTS.withPrefix(prefix), "current", manifest));
+            producer.commitTransaction();
+        }
+    }
+
     private static void prepareTopics(String bootstrap, String prefix) throws Exception {
         TopicAdmin.createAll(bootstrap, prefix, 2, (short) 1);
         try (KafkaProducer<String, String> producer = producer(bootstrap)) {

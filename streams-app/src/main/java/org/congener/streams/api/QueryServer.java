@@ -22,11 +22,14 @@ import com.sun.net.httpserver.HttpServer;
 import org.congener.schemas.Json;
 import org.congener.schemas.Suggestions;
 import org.congener.streams.SafetyCaution;
+import org.congener.streams.model.Alternatives;
 
 /**
  * The query API on the JDK's HTTP server:
  * <ul>
  *   <li>{@code GET /researchers/{id}/suggestions?n=} — the latest list, at most n items (default all);</li>
+ *   <li>{@code GET /compounds/{id}/alternatives?n=&inStock=} — similar active compounds by ontology and
+ *       by co-use under the live version (n from 1 to 50, default 10; inStock true or false);</li>
  *   <li>{@code GET /health} — the app's state.</li>
  * </ul>
  * Answers are JSON and all carry {@code caution}. Unknown researcher or resource → 404, bad parameter
@@ -35,6 +38,8 @@ import org.congener.streams.SafetyCaution;
 public final class QueryServer implements AutoCloseable {
 
     private static final Pattern SUGGESTIONS_PATH = Pattern.compile("^/researchers/([^/]+)/suggestions/?$");
+    private static final Pattern ALTERNATIVES_PATH = Pattern.compile("^/compounds/([^/]+)/alternatives/?$");
+    private static final int MAX_ALTERNATIVES = 50;
     private static final ObjectMapper JSON = Json.mapper();
 
     private final HttpServer server;
@@ -115,7 +120,12 @@ public final class QueryServer implements AutoCloseable {
             boolean forwarded = exchange.getRequestHeaders().getFirst(RemoteSuggestions.FORWARDED_HEADER) != null;
             return suggestions(researcherId, uri.getRawQuery(), forwarded);
         }
-        return error(404, "no such resource: " + path + " (try /researchers/{id}/suggestions or /health)");
+        Matcher alternatives = ALTERNATIVES_PATH.matcher(path);
+        if (alternatives.matches()) {
+            return alternatives(URLDecoder.decode(alternatives.group(1), StandardCharsets.UTF_8), uri.getRawQuery());
+        }
+        return error(404, "no such resource: " + path
+                + " (try /researchers/{id}/suggestions, /compounds/{id}/alternatives or /health)");
     }
 
     private Response health() {
@@ -164,6 +174,52 @@ public final class QueryServer implements AutoCloseable {
         List<org.congener.schemas.Suggestion> items = s.items().subList(0, Math.min(n, s.items().size()));
         return new Response(200, new Suggestions(s.schema(), s.researcherId(), s.modelVersion(), s.source(),
                 s.causedByEventId(), s.generatedAt(), items, SafetyCaution.TEXT));
+    }
+
+    private Response alternatives(String compoundId, String rawQuery) {
+        Map<String, String> params;
+        try {
+            params = parseQuery(rawQuery);
+        } catch (IllegalArgumentException e) {
+            return error(400, e.getMessage());
+        }
+        for (String name : params.keySet()) {
+            if (!name.equals("n") && !name.equals("inStock")) {
+                return error(400, "unknown parameter '" + name + "' (n and inStock are supported)");
+            }
+        }
+        int n = 10;
+        if (params.containsKey("n")) {
+            String value = params.get("n");
+            try {
+                n = Integer.parseInt(value);
+            } catch (NumberFormatException e) {
+                n = -1;
+            }
+            if (n < 1 || n > MAX_ALTERNATIVES) {
+                return error(400, "n must be a whole number from 1 to " + MAX_ALTERNATIVES + ", got '" + value + "'");
+            }
+        }
+        boolean inStock = false;
+        if (params.containsKey("inStock")) {
+            String value = params.get("inStock");
+            if (!value.equals("true") && !value.equals("false")) {
+                return error(400, "inStock must be true or false, got '" + value + "'");
+            }
+            inStock = value.equals("true");
+        }
+        if (!queries.isKnownCompound(compoundId)) {
+            return error(404, "unknown compound '" + compoundId + "'");
+        }
+        Alternatives.Lists lists = queries.alternatives(compoundId, n, inStock);
+        Map<String, Object> body = new LinkedHashMap<>();
+        body.put("compoundId", lists.compoundId());
+        body.put("modelVersion", lists.modelVersion());
+        body.put("inStockOnly", inStock);
+        body.put("byOntology", lists.byOntology());
+        body.put("byCoUse", lists.byCoUse());
+        body.put("caution", SafetyCaution.TEXT);
+        return new Response(200, body);
     }
 
     static Map<String, String> parseQuery(String rawQuery) {

@@ -11,7 +11,12 @@ import org.apache.kafka.streams.errors.InvalidStateStoreException;
 import org.apache.kafka.streams.state.HostInfo;
 import org.apache.kafka.streams.state.QueryableStoreTypes;
 import org.apache.kafka.streams.state.ReadOnlyKeyValueStore;
+import org.congener.schemas.CatalogEntry;
+import org.congener.schemas.InventoryEvent;
 import org.congener.schemas.Researcher;
+import org.congener.streams.model.Alternatives;
+import org.congener.streams.model.LiveModel;
+import org.congener.streams.model.ModelAssembler;
 import org.congener.schemas.Suggestions;
 import org.congener.streams.SuggestionTopology;
 
@@ -28,6 +33,7 @@ public final class StoreSuggestionQueries implements SuggestionQueries {
     private volatile KafkaStreams streams;
     private volatile HostInfo self;
     private volatile LongSupplier deadLetters = () -> 0;
+    private volatile ModelAssembler models;
 
     public StoreSuggestionQueries(int maxItems) {
         this.maxItems = maxItems;
@@ -38,7 +44,8 @@ public final class StoreSuggestionQueries implements SuggestionQueries {
      *
      * @param self the address in {@code application.server}, i.e. how other instances reach this one
      */
-    public void attach(KafkaStreams streams, HostInfo self, LongSupplier deadLetters) {
+    public void attach(KafkaStreams streams, HostInfo self, LongSupplier deadLetters, ModelAssembler models) {
+        this.models = models;
         this.self = self;
         this.deadLetters = deadLetters;
         this.streams = streams;
@@ -74,6 +81,43 @@ public final class StoreSuggestionQueries implements SuggestionQueries {
             return store.get(researcherId) != null;
         } catch (InvalidStateStoreException e) {
             throw notReady(app, SuggestionTopology.RESEARCHERS_STORE);
+        }
+    }
+
+    @Override
+    public boolean isKnownCompound(String compoundId) {
+        KafkaStreams app = running();
+        ReadOnlyKeyValueStore<String, CatalogEntry> store = store(app, SuggestionTopology.CATALOG_STORE);
+        try {
+            return store.get(compoundId) != null;
+        } catch (InvalidStateStoreException e) {
+            throw notReady(app, SuggestionTopology.CATALOG_STORE);
+        }
+    }
+
+    @Override
+    public Alternatives.Lists alternatives(String compoundId, int n, boolean inStockOnly) {
+        KafkaStreams app = running();
+        LiveModel model = models == null ? null : models.live();
+        if (model == null) {
+            throw new NotReadyException("no model version is live yet; alternatives need one");
+        }
+        ReadOnlyKeyValueStore<String, CatalogEntry> catalog = store(app, SuggestionTopology.CATALOG_STORE);
+        ReadOnlyKeyValueStore<String, InventoryEvent> stock = store(app, SuggestionTopology.STOCK_STORE);
+        try {
+            return Alternatives.of(model, compoundId, n, id -> {
+                CatalogEntry entry = catalog.get(id);
+                if (entry == null || !entry.active()) {
+                    return false;
+                }
+                if (!inStockOnly) {
+                    return true;
+                }
+                InventoryEvent last = stock.get(id);
+                return last != null && last.quantityOnHand() > 0;
+            });
+        } catch (InvalidStateStoreException e) {
+            throw notReady(app, SuggestionTopology.CATALOG_STORE);
         }
     }
 

@@ -3,6 +3,7 @@ package org.congener.streams.api;
 import java.util.Optional;
 
 import org.congener.schemas.Suggestions;
+import org.congener.streams.model.Alternatives;
 
 /** What the query API reads; backed by the streams app's stores, or by a fake in tests. */
 public interface SuggestionQueries {
@@ -16,6 +17,21 @@ public interface SuggestionQueries {
 
     /** Whether the researcher is in the researchers table. */
     boolean isKnownResearcher(String researcherId);
+
+    /** Whether the compound is in the catalogue. */
+    default boolean isKnownCompound(String compoundId) {
+        return false;
+    }
+
+    /**
+     * Alternatives to a catalogued compound under the live version, filtered to active compounds
+     * (and to those in stock when asked).
+     *
+     * @throws NotReadyException when no model version is live yet
+     */
+    default Alternatives.Lists alternatives(String compoundId, int n, boolean inStockOnly) {
+        throw new NotReadyException("no model version is live yet; alternatives need one");
+    }
 
     /** The app's state for {@code /health}. */
     Health health();

@@ -34,6 +34,7 @@ public final class AppConfig extends AbstractConfig {
     public static final String HTTP_ADVERTISED_ADDRESS = "http.advertised.address";
     public static final String TOP_N = "suggestions.top.n";
     public static final String POPULARITY_HALF_LIFE_HOURS = "popularity.half.life.hours";
+    public static final String IN_STOCK_ONLY = "suggestions.in.stock.only";
     public static final String TOPIC_PARTITIONS = "topic.partitions";
     public static final String TOPIC_REPLICATION_FACTOR = "topic.replication.factor";
 
@@ -74,6 +75,8 @@ public final class AppConfig extends AbstractConfig {
                             + " Set it when http.host is 0.0.0.0 (e.g. streams:7070 in docker compose).")
             .define(TOP_N, Type.INT, DEFAULT_TOP_N, Range.between(1, 100), Importance.MEDIUM,
                     "Suggestions kept and published per researcher.")
+            .define(IN_STOCK_ONLY, Type.BOOLEAN, false, Importance.LOW,
+                    "Suggest only compounds whose latest inventory event has quantity on hand above zero.")
             .define(POPULARITY_HALF_LIFE_HOURS, Type.DOUBLE, 720.0, Range.between(0.001, 1.0e6), Importance.LOW,
                     "Half-life, in hours of event time, of an event's weight in the group-popularity baseline"
                             + " (720 h = 30 days).")
@@ -137,6 +140,10 @@ public final class AppConfig extends AbstractConfig {
     /** Where other instances reach this one's query API; empty when it should be derived from the bound port. */
     public String httpAdvertisedAddress() {
         return getString(HTTP_ADVERTISED_ADDRESS);
+    }
+
+    public boolean inStockOnly() {
+        return getBoolean(IN_STOCK_ONLY);
     }
 
     public int topN() {

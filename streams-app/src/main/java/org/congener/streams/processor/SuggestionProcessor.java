@@ -15,9 +15,11 @@ import org.congener.schemas.SchemaIds;
 import org.congener.schemas.Suggestion;
 import org.congener.schemas.Suggestions;
 import org.congener.schemas.UsageEvent;
+import org.congener.schemas.UsageKind;
+import org.congener.core.interactions.InteractionWeights;
+import org.congener.streams.model.LiveModel;
 import org.congener.streams.SafetyCaution;
 import org.congener.streams.scoring.CandidateFilter;
-import org.congener.streams.scoring.InteractionWeights;
 import org.congener.streams.scoring.ScoredCandidate;
 import org.congener.streams.scoring.ScoringInput;
 import org.congener.streams.scoring.SuggestionScorer;
@@ -42,9 +44,11 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
 
     private final Stores stores;
     private final SuggestionScorer scorer;
-    private final InteractionWeights weights;
+    private final InteractionWeights coldStartWeights;
+    private final java.util.function.Supplier<LiveModel> liveModel;
     private final double halfLifeMs;
     private final int topN;
+    private final boolean inStockOnly;
     private ProcessorContext<String, Suggestions> context;
     private KeyValueStore<String, InteractionProfile> interactions;
     private KeyValueStore<String, GroupPopularity> groups;
@@ -52,11 +56,17 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
     private GlobalLookup<CatalogEntry> catalog;
     private GlobalLookup<InventoryEvent> stock;
 
-    public SuggestionProcessor(Stores stores, SuggestionScorer scorer, InteractionWeights weights,
-                               double halfLifeMs, int topN) {
+    /**
+     * @param liveModel        the live model snapshot of this instance, null before any version is live
+     * @param coldStartWeights interaction weights before any version is live (a live version brings its own)
+     */
+    public SuggestionProcessor(Stores stores, SuggestionScorer scorer, java.util.function.Supplier<LiveModel> liveModel,
+                               InteractionWeights coldStartWeights, double halfLifeMs, int topN, boolean inStockOnly) {
+        this.inStockOnly = inStockOnly;
         this.stores = stores;
         this.scorer = scorer;
-        this.weights = weights;
+        this.liveModel = liveModel;
+        this.coldStartWeights = coldStartWeights;
         this.halfLifeMs = halfLifeMs;
         this.topN = topN;
     }
@@ -81,11 +91,16 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
                     event.researcherId(), event.eventId());
             return;
         }
-        long at = Instant.parse(event.occurredAt()).toEpochMilli();
-        float weight = weights.of(event.kind());
+        // one snapshot for the whole event: its weights, its fold-in and its scores
+        LiveModel model = liveModel.get();
+        InteractionWeights weights = model == null ? coldStartWeights : model.settings().weights();
+        Instant occurred = Instant.parse(event.occurredAt());
+        long at = occurred.toEpochMilli();
+        // the strength is added as of the event's own time: decay, if any, is not applied to stored sums
+        float weight = (float) weights.contribution(event.kind(), event.quantity(), occurred, occurred);
 
         InteractionProfile profile = orNew(interactions.get(event.researcherId()), InteractionProfile::new);
-        profile.add(event.compoundId(), weight, at, InteractionWeights.isUse(event.kind()));
+        profile.add(event.compoundId(), weight, at, event.kind() != UsageKind.VIEW);
         interactions.put(event.researcherId(), profile);
 
         GroupPopularity group = orNew(groups.get(researcher.groupId()), GroupPopularity::new);
@@ -93,9 +108,13 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         groups.put(researcher.groupId(), group);
 
         CandidateFilter eligible = CandidateFilter.forResearcher(researcher, profile, catalog::get);
-        List<ScoredCandidate> ranked = scorer.rank(new ScoringInput(researcher, profile, group, at, eligible), topN);
+        if (inStockOnly) {
+            eligible = eligible.and(this::inStock);
+        }
+        ScoringInput input = new ScoringInput(researcher, profile, group, at, eligible, model);
+        List<ScoredCandidate> ranked = scorer.rank(input, topN);
         Suggestions suggestions = new Suggestions(SchemaIds.SUGGESTIONS, researcher.researcherId(),
-                scorer.modelVersion(), scorer.source(), event.eventId(),
+                scorer.modelVersionFor(input), scorer.sourceFor(input), event.eventId(),
                 Instant.ofEpochMilli(context.currentSystemTimeMs()).toString(), items(ranked), SafetyCaution.TEXT);
         context.forward(new Record<>(researcher.researcherId(), suggestions, record.timestamp()));
     }
@@ -105,12 +124,16 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         int rank = 1;
         for (ScoredCandidate c : ranked) {
             CatalogEntry entry = catalog.get(c.compoundId());
-            InventoryEvent lastStock = stock.get(c.compoundId());
-            boolean inStock = lastStock != null && lastStock.quantityOnHand() > 0;
             items.add(new Suggestion(rank++, c.compoundId(), entry.name(), c.cfScore(), c.semanticScore(),
-                    c.fusedScore(), c.contributors(), null, null, entry.hazardCodes(), inStock));
+                    c.fusedScore(), c.contributors(), null, null, entry.hazardCodes(), inStock(c.compoundId())));
         }
         return items;
+    }
+
+    /** Whether the compound's latest inventory event has quantity on hand above zero. */
+    private boolean inStock(String compoundId) {
+        InventoryEvent lastStock = stock.get(compoundId);
+        return lastStock != null && lastStock.quantityOnHand() > 0;
     }
 
     private static <T> T orNew(T value, java.util.function.Supplier<T> fresh) {

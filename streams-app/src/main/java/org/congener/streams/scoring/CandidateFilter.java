@@ -14,6 +14,11 @@ public interface CandidateFilter {
 
     boolean eligible(String compoundId);
 
+    /** Both this filter and {@code other}. */
+    default CandidateFilter and(CandidateFilter other) {
+        return compoundId -> eligible(compoundId) && other.eligible(compoundId);
+    }
+
     /**
      * The filters of the design: the compound is in the catalogue and active, the researcher holds an
      * authorisation for every one of its restriction tags, and has not used it already.

@@ -1,6 +1,7 @@
 package org.congener.streams.scoring;
 
 import org.congener.schemas.Researcher;
+import org.congener.streams.model.LiveModel;
 import org.congener.streams.state.GroupPopularity;
 import org.congener.streams.state.InteractionProfile;
 
@@ -9,7 +10,8 @@ import org.congener.streams.state.InteractionProfile;
  *
  * @param atEpochMs time of the triggering event; recency is measured against it, so replays give the
  *                  same lists as the live run
+ * @param model     the live model snapshot taken once for this event, or null before any version is live
  */
 public record ScoringInput(Researcher researcher, InteractionProfile profile, GroupPopularity group,
-                           long atEpochMs, CandidateFilter eligible) {
+                           long atEpochMs, CandidateFilter eligible, LiveModel model) {
 }

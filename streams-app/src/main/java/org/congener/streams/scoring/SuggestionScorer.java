@@ -20,6 +20,16 @@ public interface SuggestionScorer {
         return null;
     }
 
+    /** The source for one input; a scorer that depends on the live model decides per snapshot. */
+    default SuggestionSource sourceFor(ScoringInput input) {
+        return source();
+    }
+
+    /** The version for one input, or null when no model scored it. */
+    default String modelVersionFor(ScoringInput input) {
+        return modelVersion();
+    }
+
     /** At most {@code n} eligible candidates, best first. */
     List<ScoredCandidate> rank(ScoringInput input, int n);
 }

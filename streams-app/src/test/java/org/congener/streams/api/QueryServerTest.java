@@ -18,6 +18,7 @@ import org.congener.schemas.Suggestion;
 import org.congener.schemas.SuggestionSource;
 import org.congener.schemas.Suggestions;
 import org.congener.streams.SafetyCaution;
+import org.congener.streams.model.Alternatives;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -55,6 +56,19 @@ class QueryServerTest {
             @Override
             public int maxItems() {
                 return 3;
+            }
+
+            @Override
+            public boolean isKnownCompound(String compoundId) {
+                return compoundId.equals("c-1");
+            }
+
+            @Override
+            public Alternatives.Lists alternatives(String compoundId, int n, boolean inStockOnly) {
+                List<Alternatives.Alternative> all = List.of(new Alternatives.Alternative("c-2", 0.8),
+                        new Alternatives.Alternative("c-3", 0.5));
+                List<Alternatives.Alternative> first = all.subList(0, Math.min(n, all.size()));
+                return new Alternatives.Lists(compoundId, "v0001", first, inStockOnly ? List.of() : first);
             }
         });
     }
@@ -148,5 +162,30 @@ class QueryServerTest {
         JsonNode body = body(health);
         assertEquals("RUNNING", body.get("status").asText());
         assertEquals(2, body.get("deadLetters").asLong());
+    }
+
+    @Test
+    void shouldAnswerBothAlternativeListsWithTheCautionWhenTheCompoundIsKnown() throws Exception {
+        HttpResponse<String> response = send("GET", "/compounds/c-1/alternatives?n=1&inStock=true");
+        assertEquals(200, response.statusCode());
+        JsonNode body = body(response);
+        assertEquals("v0001", body.get("modelVersion").asText());
+        assertEquals(1, body.get("byOntology").size());
+        assertEquals("c-2", body.get("byOntology").get(0).get("compoundId").asText());
+        assertEquals(0, body.get("byCoUse").size());
+        assertTrue(body.get("inStockOnly").asBoolean());
+    }
+
+    @Test
+    void shouldAnswer404ForAnUnknownCompoundAnd400ForBadAlternativeParameters() throws Exception {
+        HttpResponse<String> unknown = send("GET", "/compounds/c-9/alternatives");
+        assertEquals(404, unknown.statusCode());
+        assertEquals("unknown compound 'c-9'", body(unknown).get("error").asText());
+        assertEquals(400, send("GET", "/compounds/c-1/alternatives?n=0").statusCode());
+        assertEquals(400, send("GET", "/compounds/c-1/alternatives?n=x").statusCode());
+        HttpResponse<String> badFlag = send("GET", "/compounds/c-1/alternatives?inStock=yes");
+        assertEquals(400, badFlag.statusCode());
+        assertEquals("inStock must be true or false, got 'yes'", body(badFlag).get("error").asText());
+        assertEquals(400, send("GET", "/compounds/c-1/alternatives?colour=red").statusCode());
     }
 }

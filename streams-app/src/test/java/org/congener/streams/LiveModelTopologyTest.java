@@ -1,0 +1,263 @@
+package org.congener.streams;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Properties;
+
+import org.apache.kafka.common.serialization.StringDeserializer;
+import org.apache.kafka.common.serialization.StringSerializer;
+import org.apache.kafka.streams.StreamsBuilder;
+import org.apache.kafka.streams.StreamsConfig;
+import org.apache.kafka.streams.TestInputTopic;
+import org.apache.kafka.streams.TestOutputTopic;
+import org.apache.kafka.streams.TopologyTestDriver;
+import org.congener.core.fusion.FusionSettings;
+import org.congener.core.fusion.OneResearcherScoring;
+import org.congener.core.interactions.InteractionWeights;
+import org.congener.schemas.CatalogEntry;
+import org.congener.schemas.ItemFactors;
+import org.congener.schemas.ItemNeighbours;
+import org.congener.schemas.ModelManifest;
+import org.congener.schemas.Neighbour;
+import org.congener.schemas.Researcher;
+import org.congener.schemas.Suggestion;
+import org.congener.schemas.SuggestionSource;
+import org.congener.schemas.Suggestions;
+import org.congener.schemas.UsageEvent;
+import org.congener.schemas.UsageKind;
+import org.congener.streams.model.LiveModel;
+import org.congener.streams.model.ModelAssembler;
+import org.congener.streams.processor.DeadLetteringDeserializationHandler;
+import org.congener.streams.processor.DeadLetteringProcessingHandler;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** Model versions through the topology: cold start, completeness, switching, rollback and the filters. */
+class LiveModelTopologyTest {
+
+    private static final List<String> COMPOUNDS =
+            List.of("c-acetone", "c-ethanol", "c-precursor", "c-retired", "c-toluene");
+    private static final Map<String, List<Neighbour>> NEIGHBOURS = Map.of(
+            "c-ethanol", ModelVersions.list("c-newcomer", 0.9, "c-acetone", 0.7, "c-precursor", 0.6, "c-retired", 0.5),
+            "c-acetone", ModelVersions.list("c-ethanol", 0.7, "c-toluene", 0.3),
+            "c-toluene", ModelVersions.list("c-precursor", 0.4, "c-acetone", 0.3),
+            "c-precursor", ModelVersions.list("c-ethanol", 0.6, "c-toluene", 0.4),
+            "c-retired", ModelVersions.list("c-ethanol", 0.5),
+            // a new compound with no factors yet, reachable through semantics only
+            "c-newcomer", ModelVersions.list("c-ethanol", 0.9));
+    private static final List<ModelVersions.Use> USES = List.of(
+            new ModelVersions.Use("u1", "c-ethanol", 2), new ModelVersions.Use("u1", "c-acetone", 1),
+            new ModelVersions.Use("u2", "c-acetone", 1), new ModelVersions.Use("u2", "c-toluene", 2),
+            new ModelVersions.Use("u3", "c-toluene", 1), new ModelVersions.Use("u3", "c-precursor", 1),
+            new ModelVersions.Use("u4", "c-ethanol", 1), new ModelVersions.Use("u4", "c-precursor", 2));
+
+    @TempDir
+    Path stateDir;
+
+    private TopologyTestDriver driver;
+    private ModelAssembler models;
+    private TestInputTopic<String, String> usage;
+    private TestInputTopic<String, ItemFactors> factors;
+    private TestInputTopic<String, ItemNeighbours> neighbours;
+    private TestInputTopic<String, ModelManifest> manifests;
+    private TestInputTopic<String, CatalogEntry> catalog;
+    private TestOutputTopic<String, Suggestions> suggestions;
+    private int sequence;
+
+    private TestInputTopic<String, org.congener.schemas.InventoryEvent> inventory;
+
+    @BeforeEach
+    void start() {
+        start(false);
+    }
+
+    private void start(boolean inStockOnly) {
+        if (driver != null) {
+            driver.close();
+        }
+        StreamsBuilder builder = new StreamsBuilder();
+        models = SuggestionTopology.build(builder,
+                new SuggestionTopology.Settings("lab.", 4, Duration.ofDays(30), inStockOnly));
+        Properties props = new Properties();
+        props.put(StreamsConfig.APPLICATION_ID_CONFIG, "live-model-test");
+        props.put(StreamsConfig.BOOTSTRAP_SERVERS_CONFIG, "unused:9092");
+        props.put(StreamsConfig.STATE_DIR_CONFIG, stateDir.toString());
+        props.put(StreamsConfig.DESERIALIZATION_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringDeserializationHandler.class);
+        props.put(StreamsConfig.PROCESSING_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringProcessingHandler.class);
+        props.put(DeadLetteringDeserializationHandler.TOPIC_PREFIX_CONFIG, "lab.");
+        driver = new TopologyTestDriver(builder.build(), props);
+        StringSerializer keys = new StringSerializer();
+        catalog = driver.createInputTopic("lab.catalog", keys, Fixtures.TOPICS.catalog().valueSerde().serializer());
+        Fixtures.catalog().forEach(e -> catalog.pipeInput(e.compoundId(), e));
+        catalog.pipeInput("c-newcomer", Fixtures.compound("c-newcomer", "newcomer", List.of(), true));
+        TestInputTopic<String, Researcher> researchers = driver.createInputTopic("lab.researchers", keys,
+                Fixtures.TOPICS.researchers().valueSerde().serializer());
+        Fixtures.researchers().forEach(r -> researchers.pipeInput(r.researcherId(), r));
+        factors = driver.createInputTopic("lab.model-item-factors", keys,
+                Fixtures.TOPICS.modelItemFactors().valueSerde().serializer());
+        neighbours = driver.createInputTopic("lab.item-neighbours", keys,
+                Fixtures.TOPICS.itemNeighbours().valueSerde().serializer());
+        manifests = driver.createInputTopic("lab.model-manifests", keys,
+                Fixtures.TOPICS.modelManifests().valueSerde().serializer());
+        usage = driver.createInputTopic("lab.usage-events", keys, keys);
+        inventory = driver.createInputTopic("lab.inventory-events", keys,
+                Fixtures.TOPICS.inventoryEvents().valueSerde().serializer());
+        suggestions = driver.createOutputTopic("lab.suggestions", new StringDeserializer(),
+                Fixtures.TOPICS.suggestions().valueSerde().deserializer());
+    }
+
+    @AfterEach
+    void stop() {
+        driver.close();
+    }
+
+    private static ModelVersions.Version version(String name, FusionSettings fusion, long seed) {
+        return ModelVersions.train(name, COMPOUNDS, USES, NEIGHBOURS, fusion, 2, seed);
+    }
+
+    private void publish(ModelVersions.Version v) {
+        v.factors().forEach(f -> factors.pipeInput(ModelVersions.Version.key(v.name(), f.compoundId()), f));
+        v.neighbours().forEach(n -> neighbours.pipeInput(ModelVersions.Version.key(v.name(), n.compoundId()), n));
+        manifests.pipeInput(v.name(), v.manifest());
+        manifests.pipeInput(ModelAssembler.CURRENT_KEY, v.manifest());
+    }
+
+    private Suggestions send(String researcher, String compound, UsageKind kind) {
+        UsageEvent event = Fixtures.event("e" + (++sequence), researcher, compound, kind,
+                "2026-01-02T10:00:" + String.format("%02d", sequence % 60) + "Z");
+        usage.pipeInput(researcher, Fixtures.json(event));
+        List<Suggestions> out = suggestions.readValuesToList();
+        return out.get(out.size() - 1);
+    }
+
+    private static List<String> ids(Suggestions s) {
+        return s.items().stream().map(Suggestion::compoundId).toList();
+    }
+
+    @Test
+    void shouldFlagColdStartWhenNoVersionIsLive() {
+        Suggestions s = send("ada", "c-ethanol", UsageKind.ORDER);
+        assertNull(s.modelVersion());
+        assertEquals(SuggestionSource.POPULARITY, s.source());
+    }
+
+    @Test
+    void shouldKeepColdStartUntilEveryRecordOfTheCurrentVersionIsPresent() {
+        ModelVersions.Version v1 = version("v0001", FusionSettings.blend(0.5), 1);
+        v1.factors().forEach(f -> factors.pipeInput(ModelVersions.Version.key("v0001", f.compoundId()), f));
+        manifests.pipeInput(ModelAssembler.CURRENT_KEY, v1.manifest());
+        assertNull(send("ada", "c-ethanol", UsageKind.ORDER).modelVersion(), "neighbour records still missing");
+
+        v1.neighbours().forEach(n -> neighbours.pipeInput(ModelVersions.Version.key("v0001", n.compoundId()), n));
+        Suggestions s = send("ada", "c-ethanol", UsageKind.VIEW);
+        assertEquals("v0001", s.modelVersion());
+        assertEquals(SuggestionSource.HYBRID, s.source());
+    }
+
+    @Test
+    void shouldScoreUnderTheNewVersionAtTheNextEventAndGoBackOnRollback() {
+        ModelVersions.Version v1 = version("v0001", FusionSettings.blend(0.5), 1);
+        ModelVersions.Version v2 = version("v0002", FusionSettings.product(), 2);
+        publish(v1);
+        assertEquals("v0001", send("ada", "c-ethanol", UsageKind.ORDER).modelVersion());
+
+        // v0002's factors arrive, its manifest is not current yet: v0001 stays live
+        v2.factors().forEach(f -> factors.pipeInput(ModelVersions.Version.key("v0002", f.compoundId()), f));
+        v2.neighbours().forEach(n -> neighbours.pipeInput(ModelVersions.Version.key("v0002", n.compoundId()), n));
+        assertEquals("v0001", send("ada", "c-acetone", UsageKind.VIEW).modelVersion());
+
+        manifests.pipeInput(ModelAssembler.CURRENT_KEY, v2.manifest());
+        assertEquals("v0002", send("ada", "c-acetone", UsageKind.VIEW).modelVersion());
+
+        manifests.pipeInput(ModelAssembler.CURRENT_KEY, v1.manifest());
+        assertEquals("v0001", send("ada", "c-acetone", UsageKind.VIEW).modelVersion());
+    }
+
+    @Test
+    void shouldEqualTheBatchTopNOfTheSameInteractionsAndVersion() {
+        ModelVersions.Version v1 = version("v0001", FusionSettings.blend(0.4), 3);
+        publish(v1);
+        send("ben", "c-ethanol", UsageKind.ORDER);
+        Suggestions streamed = send("ben", "c-toluene", UsageKind.WITHDRAWAL);
+
+        LiveModel model = models.live();
+        InteractionWeights w = model.settings().weights();
+        double ethanol = (float) w.contribution(UsageKind.ORDER, 1.0, java.time.Instant.EPOCH, java.time.Instant.EPOCH);
+        double toluene = (float) w.contribution(UsageKind.WITHDRAWAL, 1.0, java.time.Instant.EPOCH, java.time.Instant.EPOCH);
+        OneResearcherScoring.Scores batch = OneResearcherScoring.score(model.foldIn(), model.itemFactors(),
+                model.neighbours(), model.settings().fusion(),
+                new int[] {model.indexOf("c-ethanol"), model.indexOf("c-toluene")}, new double[] {ethanol, toluene});
+        int[] top = OneResearcherScoring.topN(batch.fused(), 4, i -> !model.compoundId(i).equals("c-retired"));
+        List<String> expected = new ArrayList<>();
+        for (int i : top) {
+            expected.add(model.compoundId(i));
+        }
+        assertEquals(expected, ids(streamed));
+        assertEquals(batch.fused()[top[0]], streamed.items().get(0).fusedScore(), 1e-12);
+        assertEquals(batch.cf()[top[0]], streamed.items().get(0).cfScore(), 1e-12);
+    }
+
+    @Test
+    void shouldNeverSuggestUsedInactiveOrUnauthorisedCompoundsUnderAModel() {
+        publish(version("v0001", FusionSettings.blend(0.5), 1));
+        Suggestions forCyd = send("cyd", "c-ethanol", UsageKind.ORDER);
+        assertEquals(SuggestionSource.HYBRID, forCyd.source());
+        assertFalse(ids(forCyd).contains("c-precursor"), "cyd lacks the precursor clearance");
+        assertFalse(ids(forCyd).contains("c-retired"), "inactive");
+        assertFalse(ids(forCyd).contains("c-ethanol"), "already used");
+
+        Suggestions forAda = send("ada", "c-ethanol", UsageKind.ORDER);
+        assertTrue(ids(forAda).contains("c-precursor"), "ada holds the clearance: " + ids(forAda));
+        assertFalse(ids(forAda).contains("c-retired"));
+    }
+
+    @Test
+    void shouldSuggestANewCompoundThroughSemanticsAndNameTheContributor() {
+        publish(version("v0001", FusionSettings.blend(0.5), 1));
+        Suggestions s = send("ada", "c-ethanol", UsageKind.ORDER);
+        Suggestion newcomer = s.items().stream().filter(i -> i.compoundId().equals("c-newcomer")).findFirst()
+                .orElseThrow(() -> new AssertionError("newcomer missing: " + ids(s)));
+        assertEquals(0.0, newcomer.cfScore(), "no factors yet");
+        assertEquals(0.9, newcomer.semanticScore(), 1e-12);
+        assertEquals("c-ethanol", newcomer.contributors().get(0).compoundId());
+    }
+
+    @Test
+    void shouldOfferActiveAlternativesByOntologyAndCoUseButNeverTheCompoundItself() {
+        publish(version("v0001", FusionSettings.blend(0.5), 1));
+        LiveModel model = models.live();
+        java.util.Set<String> active = new java.util.HashSet<>(List.of("c-acetone", "c-ethanol", "c-precursor",
+                "c-toluene", "c-newcomer"));
+        org.congener.streams.model.Alternatives.Lists lists =
+                org.congener.streams.model.Alternatives.of(model, "c-ethanol", 3, active::contains);
+        assertEquals(List.of("c-newcomer", "c-acetone", "c-precursor"),
+                lists.byOntology().stream().map(org.congener.streams.model.Alternatives.Alternative::compoundId).toList());
+        assertFalse(lists.byCoUse().isEmpty());
+        for (org.congener.streams.model.Alternatives.Alternative a : lists.byCoUse()) {
+            assertFalse(a.compoundId().equals("c-ethanol") || a.compoundId().equals("c-retired")
+                    || a.compoundId().equals("c-newcomer"), "itself, inactive, or no factors: " + a);
+            assertTrue(a.similarity() <= 1.0 + 1e-12 && a.similarity() >= -1.0 - 1e-12);
+        }
+    }
+
+    @Test
+    void shouldSuggestOnlyCompoundsInStockWhenInStockOnlyIsSet() {
+        start(true);
+        publish(version("v0001", FusionSettings.blend(0.5), 1));
+        inventory.pipeInput("c-acetone", Fixtures.stock("c-acetone", 2));
+        inventory.pipeInput("c-toluene", Fixtures.stock("c-toluene", 0));
+        Suggestions s = send("ada", "c-ethanol", UsageKind.ORDER);
+        assertEquals(List.of("c-acetone"), ids(s), "only acetone has stock on hand");
+        assertTrue(s.items().get(0).inStock());
+    }
+}
