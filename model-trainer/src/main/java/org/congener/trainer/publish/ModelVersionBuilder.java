@@ -9,6 +9,7 @@ import org.congener.core.factorisation.AlsModel;
 import org.congener.core.factorisation.FactorMatrix;
 import org.congener.core.factorisation.FixedFactors;
 import org.congener.core.fusion.FusionSettings;
+import org.congener.core.fusion.ManifestSettings;
 import org.congener.core.fusion.NeighbourLists;
 import org.congener.core.interactions.IdIndex;
 import org.congener.core.interactions.Interaction;
@@ -81,7 +82,7 @@ public final class ModelVersionBuilder {
         }
         ModelManifest manifest = new ModelManifest(SchemaIds.MODEL_MANIFEST, version, Instant.now().toString(), rank,
                 model.config().lambda(), model.config().alpha(), factors.size(), lists.size(), gramList, fusion.rule(),
-                ManifestKeys.write(fusion, model.config(), weights), Map.copyOf(offlineMetrics),
+                ManifestSettings.write(fusion, model.config(), weights), Map.copyOf(offlineMetrics),
                 ModelPublisher.checksum(factors));
         return new ModelVersion(manifest, factors, lists);
     }

@@ -13,6 +13,7 @@ import org.congener.core.factorisation.AlsConfig;
 import org.congener.core.factorisation.AlsModel;
 import org.congener.core.factorisation.ImplicitAls;
 import org.congener.core.fusion.FusionSettings;
+import org.congener.core.fusion.ManifestSettings;
 import org.congener.core.fusion.NeighbourLists;
 import org.congener.core.interactions.InteractionLog;
 import org.congener.core.ontology.Ontology;
@@ -25,7 +26,6 @@ import org.congener.trainer.evaluation.OfflineExperiment;
 import org.congener.trainer.evaluation.OntologyNeighbours;
 import org.congener.trainer.evaluation.Progress;
 import org.congener.trainer.evaluation.ReportWriter;
-import org.congener.trainer.publish.ManifestKeys;
 import org.congener.trainer.publish.ModelPublisher;
 import org.congener.trainer.publish.ModelVersion;
 import org.congener.trainer.publish.ModelVersionBuilder;
@@ -154,8 +154,12 @@ public final class TrainerService {
             return GateDecision.decide(settings.gateMetric(), candidate.figure(), null, Double.NaN,
                     settings.gateMargin());
         }
-        AlsConfig liveAls = ManifestKeys.als(base, live.rank(), live.lambda(), live.alpha(), live.fusionWeights());
-        FusionSettings liveFusion = ManifestKeys.fusion(live.fusionRule(), live.fusionWeights());
+        ManifestSettings read = ManifestSettings.of(live);
+        ManifestSettings.FoldInSettings f = read.foldIn();
+        // the live version's configuration, trained the way this run trains (iterations, seed, threads)
+        AlsConfig liveAls = new AlsConfig(live.rank(), live.lambda(), live.alpha(), f.epsilon(), f.confidence(),
+                f.regularisation(), base.solver(), f.cgSteps(), base.iterations(), base.seed(), base.threads());
+        FusionSettings liveFusion = read.fusion();
         double liveFigure = new HeldOutEvaluator(settings.experiment()).evaluate(interactions, liveAls, liveFusion,
                 neighbours, candidate.aggregation(), settings.gateMetric());
         return GateDecision.decide(settings.gateMetric(), candidate.figure(), live.version(), liveFigure,
