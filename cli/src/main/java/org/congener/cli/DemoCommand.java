@@ -153,7 +153,8 @@ public final class DemoCommand implements Callable<Integer> {
                 throw e;
             }
             counts = counting.get();
-            outcomes = trainer.stop(2, Duration.ofSeconds(timeoutSeconds));
+            // the second run starts once a third of the replay is in; a demo too short for it does not wait long
+            outcomes = trainer.stop(2, Duration.ofSeconds(Math.min(timeoutSeconds, 120)));
             example = counter.firstResearcher();
             seenAt = counter.seenAtNanos();
         }
