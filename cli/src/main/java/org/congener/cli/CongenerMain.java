@@ -16,6 +16,9 @@ import picocli.CommandLine.Command;
                 EvaluateCommand.class,
                 SimilarityCommand.class,
                 OntologyStatsCommand.class,
+                TrainCommand.class,
+                ModelsCommand.class,
+                RollbackCommand.class,
         })
 public final class CongenerMain {
 

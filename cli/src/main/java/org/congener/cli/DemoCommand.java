@@ -4,6 +4,7 @@ import java.io.PrintStream;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CompletableFuture;
@@ -12,6 +13,7 @@ import java.util.concurrent.CountDownLatch;
 
 import org.congener.cli.demo.DemoRuntime;
 import org.congener.cli.demo.DemoSummary;
+import org.congener.cli.demo.DemoTrainer;
 import org.congener.cli.demo.EventReplay;
 import org.congener.cli.demo.LatencyStats;
 import org.congener.cli.demo.OutputCounter;
@@ -22,13 +24,16 @@ import org.congener.streams.SafetyCaution;
 import org.congener.streams.StreamsApp;
 import org.congener.streams.config.AppConfig;
 import org.congener.streams.config.ConfigLoader;
+import org.congener.trainer.service.TrainingOutcome;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
 /**
  * {@code congener demo}: the whole system on this machine. Starts an embedded broker, creates the
- * topics, loads the demo catalogue and researchers, starts the streams app, replays the demo events in
- * time order (broken lines mixed in), prints a summary and serves the query API until Ctrl-C.
+ * topics, loads the demo catalogue and researchers, starts the streams app, replays the first part of the
+ * demo events as history, trains and publishes a model version on it, replays the rest in time order
+ * (broken lines mixed in) while the trainer runs again after every so many events, prints a summary and
+ * serves the query API until Ctrl-C.
  */
 @Command(name = "demo",
         mixinStandardHelpOptions = true,
@@ -65,6 +70,10 @@ public final class DemoCommand implements Callable<Integer> {
 
     @Option(names = "--replay-only", description = "exit after the summary instead of serving (for scripts)")
     boolean replayOnly;
+
+    @Option(names = "--retrain-after", paramLabel = "N",
+            description = "train again whenever N more usage events have arrived (default: a third of the replayed events)")
+    Long retrainAfter;
 
     @Option(names = "--timeout", paramLabel = "SECONDS", defaultValue = "300",
             description = "longest wait for the streams app to process the replay (default: ${DEFAULT-VALUE})")
@@ -122,18 +131,30 @@ public final class DemoCommand implements Callable<Integer> {
         String example;
         Map<String, Long> seenAt;
         long started = System.nanoTime();
+        DemoTrainer trainer = new DemoTrainer(runtime.bootstrapServers(), runtime.config().topicPrefix(),
+                runtime.dataDir().resolve("trainer-reports"), out);
+        List<TrainingOutcome> outcomes;
         try (OutputCounter counter = new OutputCounter(runtime.bootstrapServers(), runtime.config().topicPrefix())) {
             // count outputs while the replay runs, so that the time each list appears can be taken
             CompletableFuture<OutputCounter.Counts> counting = CompletableFuture.supplyAsync(() ->
                     counter.awaitTotal(expected, Duration.ofSeconds(timeoutSeconds), new ProgressLine(out, "processed", expected)));
             try {
-                replay.replayEvents(scenario, new ProgressLine(out, "replaying events", EventReplay.timelineSize(scenario)),
+                ReplayScenario history = scenario.history(scenario.historySize());
+                ReplayScenario rest = scenario.after(scenario.historySize());
+                replay.replayEvents(history, new ProgressLine(out, "replaying history",
+                        EventReplay.timelineSize(history)), rate, ackedAt);
+                trainer.trainOnce("before the replay, on " + history.usageEvents().size() + " history events");
+                trainer.startSchedule(retrainAfter != null ? retrainAfter : Math.max(1, rest.usageEvents().size() / 3));
+                replay.replayEvents(rest, new ProgressLine(out, "replaying events", EventReplay.timelineSize(rest)),
                         rate, ackedAt);
             } catch (RuntimeException | InterruptedException e) {
                 counting.cancel(true);
+                trainer.stop(0, Duration.ofSeconds(30));
                 throw e;
             }
             counts = counting.get();
+            // the second run starts once a third of the replay is in; a demo too short for it does not wait long
+            outcomes = trainer.stop(2, Duration.ofSeconds(Math.min(timeoutSeconds, 120)));
             example = counter.firstResearcher();
             seenAt = counter.seenAtNanos();
         }
@@ -146,6 +167,7 @@ public final class DemoCommand implements Callable<Integer> {
         }
         runtime.markReplayed();
         new DemoSummary(sent, counts, app.deadLetterCount(), took, LatencyStats.of(ackedAt, seenAt), rate).print(out);
+        out.println("  model versions:   " + DemoTrainer.versionsLine(outcomes));
         printUrls(out, app, example);
     }
 

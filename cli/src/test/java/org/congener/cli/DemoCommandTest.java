@@ -64,6 +64,10 @@ class DemoCommandTest {
         assertTrue(run.out().contains("/researchers/"), "prints a query URL");
         assertTrue(run.out().contains("safety data sheet"), "prints the caution");
         assertTrue(Files.exists(data.resolve("kafka")), "broker data kept under --data-dir");
+        assertTrue(run.out().contains("trainer (before the replay"), run.out());
+        assertTrue(run.out().matches("(?s).*model versions: +v0001 → v0002, v0002 live.*"),
+                "a second version goes live during the demo: " + run.out());
+        assertTrue(Files.exists(data.resolve("trainer-reports/v0002/report.html")));
     }
 
     @Test

@@ -34,4 +34,25 @@ public record ReplayScenario(String institute, List<CatalogEntry> catalog, List<
                 .toList();
         return new ReplayScenario(institute, catalog, researchers, List.copyOf(usage), inventory, badUsageLines);
     }
+
+    /** Where the demo splits the usage events into the history trained on before the replay and the rest. */
+    public int historySize() {
+        return usageEvents.size() * 2 / 5;
+    }
+
+    /** The first {@code n} usage events and the inventory events up to the last of them; no broken lines. */
+    public ReplayScenario history(int n) {
+        ReplayScenario first = limitedTo(n);
+        return new ReplayScenario(institute, catalog, researchers, first.usageEvents(), first.inventoryEvents(),
+                List.of());
+    }
+
+    /** What {@link #history} leaves: the usage events from {@code n}, the later inventory events, every broken line. */
+    public ReplayScenario after(int n) {
+        ReplayScenario first = history(n);
+        List<UsageEvent> usage = List.copyOf(usageEvents.subList(Math.min(n, usageEvents.size()), usageEvents.size()));
+        List<InventoryEvent> inventory = List.copyOf(inventoryEvents.subList(first.inventoryEvents().size(),
+                inventoryEvents.size()));
+        return new ReplayScenario(institute, catalog, researchers, usage, inventory, badUsageLines);
+    }
 }
