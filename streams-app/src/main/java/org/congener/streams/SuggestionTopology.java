@@ -149,7 +149,7 @@ public final class SuggestionTopology {
                 .to(suggestions.name(), Produced.with(suggestions.keySerde(), suggestions.valueSerde()));
 
         // this app wrote these lists a moment ago: read them back without a second schema check (a
-        // validated read of a top-10 list costs about 180 µs, docs/benchmarks/schemas.md); a value
+        // validated read of a top-10 list costs about 180 µs, BENCHMARKS.md, "Wire contracts"); a value
         // that does not parse still reaches the dead letters through the deserialization handler
         Serde<Suggestions> ownLists = RecordSerdes.storeValue(TopicName.SUGGESTIONS, Suggestions.class);
         builder.table(suggestions.name(), Consumed.with(suggestions.keySerde(), ownLists),

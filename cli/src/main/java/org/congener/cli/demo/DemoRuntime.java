@@ -2,6 +2,7 @@ package org.congener.cli.demo;
 
 import java.io.IOException;
 import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
@@ -12,6 +13,7 @@ import org.apache.kafka.common.utils.Utils;
 import org.congener.broker.EmbeddedKafkaBroker;
 import org.congener.broker.FreePorts;
 import org.congener.broker.TopicAdmin;
+import org.congener.demo.DemoData;
 import org.congener.streams.StreamsApp;
 import org.congener.streams.config.AppConfig;
 
@@ -81,6 +83,12 @@ public final class DemoRuntime implements AutoCloseable {
         Map<String, String> fixed = new LinkedHashMap<>();
         fixed.put(AppConfig.BOOTSTRAP_SERVERS, broker.bootstrapServers());
         fixed.put(AppConfig.STATE_DIR, dir.resolve("streams-state").toString());
+        if (settings.ontologyFile() == null) {
+            // the demo's own ontology, so that each suggestion can name the class it shares with the researcher's compounds
+            Path ontology = dir.resolve("demo-ontology.obo");
+            Files.writeString(ontology, DemoData.ontologyObo(), StandardCharsets.UTF_8);
+            fixed.put(AppConfig.ONTOLOGY_FILE, ontology.toString());
+        }
         AppConfig config = settings.with(fixed);
         DemoRuntime runtime = new DemoRuntime(dir, temp, broker, config, earlier);
         try {
