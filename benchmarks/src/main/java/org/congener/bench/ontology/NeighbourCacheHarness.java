@@ -1,8 +1,5 @@
 package org.congener.bench.ontology;
 
-import java.lang.management.ManagementFactory;
-import java.lang.management.MemoryPoolMXBean;
-import java.lang.management.MemoryType;
 import java.util.Locale;
 import java.util.Map;
 
@@ -51,11 +48,11 @@ public final class NeighbourCacheHarness {
 
         for (int run = 1; run <= runs; run++) {
             long before = liveHeap();
-            resetPeaks();
+            HeapPeaks.reset();
             long start = System.nanoTime();
             NeighbourCache cache = NeighbourCache.build(catalogue, similarity, new NeighbourCacheSettings(k, threads));
             long elapsed = System.nanoTime() - start;
-            long peak = peakHeap();
+            long peak = HeapPeaks.peak();
             long after = liveHeap();
             long allPairs = (long) compounds * (compounds - 1);
             System.out.printf(Locale.ROOT, "run %d: %s, %d threads: %.2f s; entries visited %d (all pairs: %d); "
@@ -71,24 +68,5 @@ public final class NeighbourCacheHarness {
         }
         Runtime runtime = Runtime.getRuntime();
         return runtime.totalMemory() - runtime.freeMemory();
-    }
-
-    private static void resetPeaks() {
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == MemoryType.HEAP) {
-                pool.resetPeakUsage();
-            }
-        }
-    }
-
-    /** Sum of per-pool peaks: an upper bound on the heap in use at any one moment. */
-    private static long peakHeap() {
-        long sum = 0;
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == MemoryType.HEAP) {
-                sum += pool.getPeakUsage().getUsed();
-            }
-        }
-        return sum;
     }
 }

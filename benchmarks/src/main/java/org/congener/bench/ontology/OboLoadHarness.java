@@ -2,9 +2,6 @@ package org.congener.bench.ontology;
 
 import java.io.BufferedWriter;
 import java.io.IOException;
-import java.lang.management.ManagementFactory;
-import java.lang.management.MemoryPoolMXBean;
-import java.lang.management.MemoryType;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -32,11 +29,11 @@ public final class OboLoadHarness {
         try {
             long terms = write(file, targetBytes);
             System.out.printf(Locale.ROOT, "wrote %s: %.1f MB, %d stanzas%n", file, Files.size(file) / 1e6, terms);
-            resetPeaks();
+            HeapPeaks.reset();
             long start = System.nanoTime();
             Ontology ontology = new OboReader().read(file);
             long elapsed = System.nanoTime() - start;
-            long peak = peakHeap();
+            long peak = HeapPeaks.peak();
             System.gc();
             Runtime runtime = Runtime.getRuntime();
             System.out.printf(Locale.ROOT, "read %d terms, %d edges, %d obsolete left out in %.2f s; "
@@ -100,23 +97,5 @@ public final class OboLoadHarness {
             p = random.nextLong(t);
         } while (p > 10 && p % 97 == 0);
         return p;
-    }
-
-    private static void resetPeaks() {
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == MemoryType.HEAP) {
-                pool.resetPeakUsage();
-            }
-        }
-    }
-
-    private static long peakHeap() {
-        long sum = 0;
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == MemoryType.HEAP) {
-                sum += pool.getPeakUsage().getUsed();
-            }
-        }
-        return sum;
     }
 }
