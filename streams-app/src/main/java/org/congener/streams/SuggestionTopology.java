@@ -2,7 +2,7 @@ package org.congener.streams;
 
 import java.time.Duration;
 
-import org.apache.kafka.common.serialization.Serde;
+import org.apache.kafka.common.serialization.Serializer;
 import org.apache.kafka.common.serialization.Serdes;
 import org.apache.kafka.common.utils.Bytes;
 import org.apache.kafka.streams.StreamsBuilder;
@@ -10,7 +10,6 @@ import org.apache.kafka.streams.kstream.Consumed;
 import org.apache.kafka.streams.kstream.KStream;
 import org.apache.kafka.streams.kstream.Materialized;
 import org.apache.kafka.streams.kstream.Produced;
-import org.apache.kafka.streams.kstream.Repartitioned;
 import org.apache.kafka.streams.state.KeyValueStore;
 import org.apache.kafka.streams.state.Stores;
 import org.congener.schemas.DeadLetter;
@@ -41,16 +40,19 @@ import org.congener.streams.state.InteractionProfileSerde;
  * The suggestion topology.
  *
  * <pre>
- * usage-events (raw bytes) ─▶ intake ─┬─ rejected ─▶ dead-letters
- *                                      └─ accepted, re-keyed by group ─▶ repartition
- *     ─▶ suggest [researcher-interactions, group-popularity] ─▶ suggestions ─▶ latest-suggestions (table)
+ * usage-events (raw bytes, keyed by researcher) ─▶ intake ─┬─ rejected ─▶ dead-letters
+ *                                                          └─ accepted ─▶ suggest ─▶ suggestions
+ *     suggest's stores: researcher-interactions, latest-suggestions, group-popularity (cold start only)
  * catalog, researchers, inventory-events ─▶ global tables read by intake and suggest
  * model-item-factors, item-neighbours, model-manifests ─▶ global stores ─▶ model assembler ─▶ live snapshot
  * </pre>
  *
- * Events are repartitioned by research group so that one task holds all of a group's members and the
- * group's popularity. The latest list per researcher is a table over the {@code suggestions} topic,
- * partitioned by researcher, which the query API reads.
+ * One sub-topology, no repartition: events arrive keyed by researcher, and everything a list needs
+ * besides the researcher's own state is global. A repartition hop would cost a second exactly-once
+ * write and read per event and a commit interval of latency (the design before this one keyed by
+ * group, for group popularity, and ran at about 300 events/s with seconds of latency; BENCHMARKS.md).
+ * The latest list per researcher is written by suggest itself, as the same JSON bytes it publishes,
+ * into a store partitioned like {@code usage-events} that the query API reads.
  */
 public final class SuggestionTopology {
 
@@ -63,7 +65,6 @@ public final class SuggestionTopology {
     public static final String ITEM_FACTORS_STORE = "model-item-factors-store";
     public static final String NEIGHBOURS_STORE = "item-neighbours-store";
     public static final String MANIFESTS_STORE = "model-manifests-store";
-    static final String BY_GROUP_REPARTITION = "usage-by-group";
 
     /** What the topology needs besides the builder. */
     public record Settings(String topicPrefix, int topN, Duration popularityHalfLife, boolean inStockOnly) {
@@ -120,10 +121,13 @@ public final class SuggestionTopology {
         // the latest stock event per compound; "in stock" means its quantity on hand is above zero
         globalTable(builder, topics.inventoryEvents(), STOCK_STORE);
 
+        // caching: a heavy user's several events within one commit interval cost one changelog record
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(INTERACTIONS_STORE),
-                Serdes.String(), new InteractionProfileSerde()));
+                Serdes.String(), new InteractionProfileSerde()).withCachingEnabled());
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(GROUP_POPULARITY_STORE),
-                Serdes.String(), new GroupPopularitySerde()));
+                Serdes.String(), new GroupPopularitySerde()).withCachingEnabled());
+        builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(LATEST_SUGGESTIONS_STORE),
+                Serdes.String(), Serdes.ByteArray()).withCachingEnabled());
 
         Topic<UsageEvent> usage = topics.usageEvents();
         KStream<String, Intake> intake = builder
@@ -136,26 +140,17 @@ public final class SuggestionTopology {
                 .to(deadLetters.name(), Produced.with(deadLetters.keySerde(), deadLetters.valueSerde()));
 
         SuggestionProcessor.Stores stores = new SuggestionProcessor.Stores(INTERACTIONS_STORE, GROUP_POPULARITY_STORE,
-                RESEARCHERS_STORE, CATALOG_STORE, STOCK_STORE);
+                LATEST_SUGGESTIONS_STORE, RESEARCHERS_STORE, CATALOG_STORE, STOCK_STORE);
         double halfLifeMs = settings.popularityHalfLife().toMillis();
         Topic<Suggestions> suggestions = topics.suggestions();
+        // the lists are this app's own output, built from checked values: written without a schema check
+        Serializer<Suggestions> listWriter = suggestions.valueSerde().serializer();
         intake.filter((key, value) -> value.isAccepted())
                 .mapValues(Intake::event)
-                // values on the internal topic were validated a moment ago: no second validation
-                .repartition(Repartitioned.with(usage.keySerde(), RecordSerdes.storeValue(TopicName.USAGE_EVENTS, UsageEvent.class))
-                        .withName(BY_GROUP_REPARTITION))
                 .process(() -> new SuggestionProcessor(stores, scorer, models::live, InteractionWeights.defaults(),
-                        halfLifeMs, settings.topN(), settings.inStockOnly(), sharedTerms), INTERACTIONS_STORE, GROUP_POPULARITY_STORE)
-                .to(suggestions.name(), Produced.with(suggestions.keySerde(), suggestions.valueSerde()));
-
-        // this app wrote these lists a moment ago: read them back without a second schema check (a
-        // validated read of a top-10 list costs about 180 µs, BENCHMARKS.md, "Wire contracts"); a value
-        // that does not parse still reaches the dead letters through the deserialization handler
-        Serde<Suggestions> ownLists = RecordSerdes.storeValue(TopicName.SUGGESTIONS, Suggestions.class);
-        builder.table(suggestions.name(), Consumed.with(suggestions.keySerde(), ownLists),
-                Materialized.<String, Suggestions, KeyValueStore<Bytes, byte[]>>as(LATEST_SUGGESTIONS_STORE)
-                        .withKeySerde(suggestions.keySerde())
-                        .withValueSerde(ownLists));
+                        halfLifeMs, settings.topN(), settings.inStockOnly(), sharedTerms, listWriter),
+                        INTERACTIONS_STORE, GROUP_POPULARITY_STORE, LATEST_SUGGESTIONS_STORE)
+                .to(suggestions.name(), Produced.with(suggestions.keySerde(), Serdes.ByteArray()));
         return models;
     }
 

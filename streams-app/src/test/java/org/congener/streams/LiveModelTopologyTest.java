@@ -169,6 +169,29 @@ class LiveModelTopologyTest {
     }
 
     @Test
+    void shouldKeepAVersionOffWhenItsFactorRecordsDoNotMatchTheManifestChecksum() {
+        ModelVersions.Version v1 = version("v0001", FusionSettings.blend(0.5), 1);
+        publish(v1);
+        assertEquals("v0001", send("ada", "c-ethanol", UsageKind.ORDER).modelVersion());
+
+        // v0002 arrives complete, but one factor record is not the one its manifest was written for
+        ModelVersions.Version v2 = version("v0002", FusionSettings.blend(0.5), 2);
+        List<ItemFactors> altered = new ArrayList<>(v2.factors());
+        ItemFactors first = altered.get(0);
+        float[] changed = first.factors().clone();
+        changed[0] += 0.5f;
+        altered.set(0, new ItemFactors(first.schema(), first.version(), first.compoundId(), changed));
+        altered.forEach(f -> factors.pipeInput(ModelVersions.Version.key("v0002", f.compoundId()), f));
+        v2.neighbours().forEach(n -> neighbours.pipeInput(ModelVersions.Version.key("v0002", n.compoundId()), n));
+        manifests.pipeInput(ModelAssembler.CURRENT_KEY, v2.manifest());
+        assertEquals("v0001", send("ada", "c-acetone", UsageKind.VIEW).modelVersion(), "checksum mismatch: v0001 stays");
+
+        // the right record arrives (a republish): the checksum matches and v0002 goes live
+        factors.pipeInput(ModelVersions.Version.key("v0002", first.compoundId()), first);
+        assertEquals("v0002", send("ada", "c-acetone", UsageKind.VIEW).modelVersion());
+    }
+
+    @Test
     void shouldScoreUnderTheNewVersionAtTheNextEventAndGoBackOnRollback() {
         ModelVersions.Version v1 = version("v0001", FusionSettings.blend(0.5), 1);
         ModelVersions.Version v2 = version("v0002", FusionSettings.product(), 2);

@@ -1,9 +1,6 @@
 package org.congener.streams;
 
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
@@ -18,6 +15,7 @@ import org.congener.core.fusion.ManifestSettings;
 import org.congener.core.interactions.InteractionMatrixBuilder;
 import org.congener.core.interactions.InteractionWeights;
 import org.congener.schemas.ItemFactors;
+import org.congener.schemas.ModelChecksum;
 import org.congener.schemas.ItemNeighbours;
 import org.congener.schemas.ModelManifest;
 import org.congener.schemas.Neighbour;
@@ -85,20 +83,8 @@ public final class ModelVersions {
         ModelManifest manifest = new ModelManifest(SchemaIds.MODEL_MANIFEST, version, Fixtures.DAY0, rank,
                 als.lambda(), als.alpha(), factors.size(), lists.size(), gramList, fusion.rule(),
                 ManifestSettings.write(fusion, als, InteractionWeights.defaults()), Map.of("ndcg@10", 0.0),
-                checksum(factors));
+                ModelChecksum.of(factors));
         return new Version(version, factors, lists, manifest);
-    }
-
-    private static String checksum(List<ItemFactors> factors) {
-        try {
-            MessageDigest sha = MessageDigest.getInstance("SHA-256");
-            for (ItemFactors f : factors) {
-                sha.update(Fixtures.TOPICS.modelItemFactors().valueSerde().serializer().serialize("t", f));
-            }
-            return HexFormat.of().formatHex(sha.digest());
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException(e);
-        }
     }
 
     /** Compact form of a neighbour list for fixtures: id, similarity, id, similarity, … */

@@ -225,16 +225,24 @@ class SuggestionTopologyTest {
     }
 
     @Test
+    void shouldRejectEventWithoutKeyBecauseItsResearcherStateLivesByKey() {
+        usage.pipeInput((String) null, Fixtures.json(Fixtures.event("e-n", "ada", "c-ethanol", UsageKind.ORDER, Fixtures.DAY0)));
+        assertTrue(suggestions.isEmpty());
+        assertEquals("no key: usage events are keyed by their researcher id ('ada')", deadLetters.readValue().reason());
+    }
+
+    @Test
     void shouldKeepLatestListPerResearcherInQueryableStore() {
         send("ben", "c-acetone", UsageKind.ORDER, "2026-01-02T10:00:00Z");
         send("ada", "c-ethanol", UsageKind.ORDER, "2026-01-03T10:00:00Z");
         send("ada", "c-toluene", UsageKind.VIEW, "2026-01-03T11:00:00Z");
         List<Suggestions> out = suggestions.readValuesToList();
 
-        KeyValueStore<String, Suggestions> latest = driver.getKeyValueStore(SuggestionTopology.LATEST_SUGGESTIONS_STORE);
-        assertEquals(out.get(2), latest.get("ada"));
-        assertEquals(out.get(0), latest.get("ben"));
-        assertFalse(latest.get("ada").items().isEmpty());
+        KeyValueStore<String, byte[]> latest = driver.getKeyValueStore(SuggestionTopology.LATEST_SUGGESTIONS_STORE);
+        var reader = Fixtures.TOPICS.suggestions().valueSerde().deserializer();
+        assertEquals(out.get(2), reader.deserialize("t", latest.get("ada")));
+        assertEquals(out.get(0), reader.deserialize("t", latest.get("ben")));
+        assertFalse(reader.deserialize("t", latest.get("ada")).items().isEmpty());
     }
 
     @Test
@@ -274,7 +282,7 @@ class SuggestionTopologyTest {
         assertEquals(List.of("e1", "e3"), suggestions.readValuesToList().stream().map(Suggestions::causedByEventId).toList());
         DeadLetter letter = deadLetters.readValue();
         assertTrue(letter.reason().contains("scorer defect"), letter.reason());
-        assertTrue(letter.sourceTopic().endsWith("usage-by-group-repartition"), letter.sourceTopic());
+        assertEquals("lab.usage-events", letter.sourceTopic(), "the raw record of the source topic, no internal hop");
         assertTrue(letter.payload().contains("\"eventId\":\"e2\""), letter.payload());
     }
 

@@ -1,10 +1,7 @@
 package org.congener.trainer.publish;
 
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.Properties;
 import org.apache.kafka.clients.producer.KafkaProducer;
@@ -13,6 +10,7 @@ import org.apache.kafka.clients.producer.ProducerRecord;
 import org.apache.kafka.common.serialization.ByteArraySerializer;
 import org.apache.kafka.common.serialization.StringSerializer;
 import org.congener.schemas.ItemFactors;
+import org.congener.schemas.ModelChecksum;
 import org.congener.schemas.ItemNeighbours;
 import org.congener.schemas.ModelManifest;
 import org.congener.schemas.TopicName;
@@ -62,17 +60,10 @@ public final class ModelPublisher implements AutoCloseable {
         return "congener-trainer-" + (topics.prefix().isEmpty() ? "default" : topics.prefix());
     }
 
-    /** hex SHA-256 over the factor records' JSON values in compound-id order (the contract's checksum). */
+    /** The contract's checksum ({@link ModelChecksum}); refuses NaN or infinite factors first. */
     public static String checksum(List<ItemFactors> factors) {
-        try {
-            MessageDigest sha = MessageDigest.getInstance("SHA-256");
-            for (ItemFactors f : sortedFactors(factors)) {
-                sha.update(serialiseFactors(f));
-            }
-            return HexFormat.of().formatHex(sha.digest());
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is part of every Java runtime", e);
-        }
+        factors.forEach(ModelPublisher::serialiseFactors);
+        return ModelChecksum.of(factors);
     }
 
     /** Publishes {@code version} and makes it live, or throws and leaves the live version as it was. */

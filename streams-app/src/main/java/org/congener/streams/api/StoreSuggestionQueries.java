@@ -28,6 +28,10 @@ import org.congener.streams.SuggestionTopology;
  */
 public final class StoreSuggestionQueries implements SuggestionQueries {
 
+    private static final org.apache.kafka.common.serialization.Deserializer<Suggestions> LIST_READER =
+            org.congener.streams.serde.RecordSerdes.storeValue(org.congener.schemas.TopicName.SUGGESTIONS,
+                    Suggestions.class).deserializer();
+
     private final int maxItems;
     private final RemoteSuggestions remote = new RemoteSuggestions();
     private volatile KafkaStreams streams;
@@ -65,9 +69,10 @@ public final class StoreSuggestionQueries implements SuggestionQueries {
                 return remote.fetch(metadata.activeHost(), researcherId);
             }
         }
-        ReadOnlyKeyValueStore<String, Suggestions> store = store(app, SuggestionTopology.LATEST_SUGGESTIONS_STORE);
+        ReadOnlyKeyValueStore<String, byte[]> store = store(app, SuggestionTopology.LATEST_SUGGESTIONS_STORE);
         try {
-            return Optional.ofNullable(store.get(researcherId));
+            // the store holds the JSON the app published; read without a schema check, it wrote them itself
+            return Optional.ofNullable(LIST_READER.deserialize(null, store.get(researcherId)));
         } catch (InvalidStateStoreException e) {
             throw notReady(app, SuggestionTopology.LATEST_SUGGESTIONS_STORE);
         }

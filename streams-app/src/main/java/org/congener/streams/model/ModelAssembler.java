@@ -6,6 +6,7 @@ import java.util.concurrent.atomic.AtomicReference;
 
 import org.congener.schemas.ItemFactors;
 import org.congener.schemas.ItemNeighbours;
+import org.congener.schemas.ModelChecksum;
 import org.congener.schemas.ModelManifest;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -14,7 +15,8 @@ import org.slf4j.LoggerFactory;
  * Collects the records of the three model topics as they arrive and makes a version live when the
  * {@code current} manifest names it and exactly {@code itemCount} factor records and
  * {@code neighbourCount} neighbour records of that version are present; until then the previous
- * version stays live. One writer (the global thread), any number of readers of {@link #live()}: the
+ * version stays live, and it stays off when the factor records do not match the manifest's checksum
+ * ({@link ModelChecksum}). One writer (the global thread), any number of readers of {@link #live()}: the
  * switch is one atomic reference swap.
  */
 public final class ModelAssembler {
@@ -26,6 +28,7 @@ public final class ModelAssembler {
     private final Map<String, Map<String, ItemNeighbours>> neighbours = new HashMap<>();
     private final AtomicReference<LiveModel> live = new AtomicReference<>();
     private ModelManifest current;
+    private String refusedVersion;
 
     /** The live snapshot, or null before any version is complete. */
     public LiveModel live() {
@@ -86,6 +89,15 @@ public final class ModelAssembler {
         Map<String, ItemFactors> f = factors.getOrDefault(version, Map.of());
         Map<String, ItemNeighbours> n = neighbours.getOrDefault(version, Map.of());
         if (f.size() != current.itemCount() || n.size() != current.neighbourCount()) {
+            return;
+        }
+        String checksum = ModelChecksum.of(f.values());
+        if (!checksum.equals(current.checksum())) {
+            if (!version.equals(refusedVersion)) {
+                LOG.error("model version {} has all its records but their checksum {} is not the manifest's {};"
+                        + " {} stays live", version, checksum, current.checksum(), now == null ? "no version" : now.version());
+                refusedVersion = version;
+            }
             return;
         }
         try {

@@ -4,6 +4,7 @@ import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.apache.kafka.common.serialization.Serializer;
 import org.apache.kafka.streams.processor.api.Processor;
 import org.apache.kafka.streams.processor.api.ProcessorContext;
 import org.apache.kafka.streams.processor.api.Record;
@@ -30,17 +31,23 @@ import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
 /**
- * For each accepted usage event (keyed by the researcher's group, so that a whole group's state is in
- * one task): updates the researcher's interaction profile and the group's popularity, scores, and
- * publishes the researcher's new top-N, keyed by researcher.
+ * For each accepted usage event (keyed by researcher, so a researcher's state lives in the task of
+ * their partition of {@code usage-events}, with no repartition hop): updates the researcher's
+ * interaction profile, scores, keeps the folded vector for the next event's warm start, and publishes
+ * the researcher's new top-N as JSON both to {@code suggestions} and to the queryable store of latest
+ * lists — serialised once for both.
+ *
+ * <p>Before any model version is live the cold-start scorer ranks by group popularity; that popularity
+ * is kept only while no version is live (it serves nothing afterwards and would cost a store read and
+ * write per event), and only over the group's members whose partitions this task holds.
  */
-public final class SuggestionProcessor implements Processor<String, UsageEvent, String, Suggestions> {
+public final class SuggestionProcessor implements Processor<String, UsageEvent, String, byte[]> {
 
     private static final Logger LOG = LoggerFactory.getLogger(SuggestionProcessor.class);
 
     /** Store and table names the processor reads. */
-    public record Stores(String interactions, String groupPopularity, String researchers, String catalog,
-                         String stock) {
+    public record Stores(String interactions, String groupPopularity, String latestSuggestions,
+                         String researchers, String catalog, String stock) {
     }
 
     private final Stores stores;
@@ -51,9 +58,11 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
     private final int topN;
     private final boolean inStockOnly;
     private final SharedTerms sharedTerms;
-    private ProcessorContext<String, Suggestions> context;
+    private final Serializer<Suggestions> listWriter;
+    private ProcessorContext<String, byte[]> context;
     private KeyValueStore<String, InteractionProfile> interactions;
     private KeyValueStore<String, GroupPopularity> groups;
+    private KeyValueStore<String, byte[]> latest;
     private GlobalLookup<Researcher> researchers;
     private GlobalLookup<CatalogEntry> catalog;
     private GlobalLookup<InventoryEvent> stock;
@@ -63,7 +72,9 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
      * @param coldStartWeights interaction weights before any version is live (a live version brings its own)
      */
     public SuggestionProcessor(Stores stores, SuggestionScorer scorer, java.util.function.Supplier<LiveModel> liveModel,
-                               InteractionWeights coldStartWeights, double halfLifeMs, int topN, boolean inStockOnly, SharedTerms sharedTerms) {
+                               InteractionWeights coldStartWeights, double halfLifeMs, int topN, boolean inStockOnly,
+                               SharedTerms sharedTerms, Serializer<Suggestions> listWriter) {
+        this.listWriter = listWriter;
         this.inStockOnly = inStockOnly;
         this.sharedTerms = sharedTerms;
         this.stores = stores;
@@ -75,10 +86,11 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
     }
 
     @Override
-    public void init(ProcessorContext<String, Suggestions> context) {
+    public void init(ProcessorContext<String, byte[]> context) {
         this.context = context;
         this.interactions = context.getStateStore(stores.interactions());
         this.groups = context.getStateStore(stores.groupPopularity());
+        this.latest = context.getStateStore(stores.latestSuggestions());
         this.researchers = GlobalLookup.of(context, stores.researchers());
         this.catalog = GlobalLookup.of(context, stores.catalog());
         this.stock = GlobalLookup.of(context, stores.stock());
@@ -104,22 +116,28 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
 
         InteractionProfile profile = orNew(interactions.get(event.researcherId()), InteractionProfile::new);
         profile.add(event.compoundId(), weight, at, event.kind() != UsageKind.VIEW);
-        interactions.put(event.researcherId(), profile);
 
-        GroupPopularity group = orNew(groups.get(researcher.groupId()), GroupPopularity::new);
-        group.add(event.compoundId(), weight, at, halfLifeMs);
-        groups.put(researcher.groupId(), group);
+        GroupPopularity group = null;
+        if (model == null) {
+            group = orNew(groups.get(researcher.groupId()), GroupPopularity::new);
+            group.add(event.compoundId(), weight, at, halfLifeMs);
+            groups.put(researcher.groupId(), group);
+        }
 
         CandidateFilter eligible = CandidateFilter.forResearcher(researcher, profile, catalog::get);
         if (inStockOnly) {
             eligible = eligible.and(this::inStock);
         }
         ScoringInput input = new ScoringInput(researcher, profile, group, at, eligible, model);
+        // the scorer keeps the folded vector in the profile, so the profile is written after scoring
         List<ScoredCandidate> ranked = scorer.rank(input, topN);
+        interactions.put(event.researcherId(), profile);
         Suggestions suggestions = new Suggestions(SchemaIds.SUGGESTIONS, researcher.researcherId(),
                 scorer.modelVersionFor(input), scorer.sourceFor(input), event.eventId(),
                 Instant.ofEpochMilli(context.currentSystemTimeMs()).toString(), items(ranked), SafetyCaution.TEXT);
-        context.forward(new Record<>(researcher.researcherId(), suggestions, record.timestamp()));
+        byte[] json = listWriter.serialize(null, suggestions);
+        latest.put(researcher.researcherId(), json);
+        context.forward(new Record<>(researcher.researcherId(), json, record.timestamp()));
     }
 
     private List<Suggestion> items(List<ScoredCandidate> ranked) {

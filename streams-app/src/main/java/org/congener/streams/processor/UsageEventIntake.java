@@ -20,10 +20,11 @@ import org.slf4j.LoggerFactory;
 
 /**
  * Reads raw usage-event bytes, so that the source topic, partition and offset of a bad record are
- * known, and passes on either the parsed event (re-keyed by the researcher's group) or a dead letter
- * (under the original key). A record is rejected when it does not parse or validate, when its key is
- * not its researcher, when its time or quantity is unusable, or when its researcher or compound is
- * unknown. The app never stops on a bad record.
+ * known, and passes on either the parsed event or a dead letter, both under the original key. A record
+ * is rejected when it does not parse or validate, when its key is missing or not its researcher (a
+ * researcher's state lives with the partition their key hashes to, so an event under any other key
+ * would be scored against the wrong state), when its time or quantity is unusable, or when its
+ * researcher or compound is unknown. The app never stops on a bad record.
  */
 public final class UsageEventIntake implements Processor<String, byte[], String, Intake> {
 
@@ -57,8 +58,8 @@ public final class UsageEventIntake implements Processor<String, byte[], String,
         String topic = source == null ? "unknown" : source.topic();
         try {
             UsageEvent event = RecordSerdes.parse(serde, topic, record.value());
-            Researcher researcher = check(record.key(), event);
-            context.forward(record.withKey(researcher.groupId()).withValue(Intake.accepted(event)));
+            check(record.key(), event);
+            context.forward(record.withValue(Intake.accepted(event)));
         } catch (RecordRejectedException e) {
             int partition = source == null ? -1 : source.partition();
             long offset = source == null ? -1 : source.offset();
@@ -74,7 +75,11 @@ public final class UsageEventIntake implements Processor<String, byte[], String,
         if (event == null) {
             throw new RecordRejectedException("empty value: usage events have no tombstones");
         }
-        if (key != null && !key.equals(event.researcherId())) {
+        if (key == null) {
+            throw new RecordRejectedException("no key: usage events are keyed by their researcher id ('"
+                    + event.researcherId() + "')");
+        }
+        if (!key.equals(event.researcherId())) {
             throw new RecordRejectedException("key '" + key + "' is not the event's researcher '"
                     + event.researcherId() + "'");
         }

@@ -51,6 +51,7 @@ public final class HybridScorer implements SuggestionScorer {
         Row row = Row.of(input.profile(), model);
         OneResearcherScoring.Scores scores = OneResearcherScoring.score(model.foldIn(), model.itemFactors(),
                 model.neighbours(), model.settings().fusion(), row.items, row.strengths);
+        input.profile().keepVector(model.version(), scores.vector());
         int[] top = OneResearcherScoring.topN(scores.fused(), n,
                 i -> input.eligible().eligible(model.compoundId(i)));
         List<ScoredCandidate> ranked = new ArrayList<>(top.length);

@@ -7,8 +7,10 @@ import java.util.Map;
 
 /**
  * What one researcher has done with each compound: summed interaction strength r_ui, number of
- * events, when last seen, and whether the researcher has actually used it (anything but a view).
- * Kept per researcher in a RocksDB store; see {@link InteractionProfileSerde} for the bytes.
+ * events, when last seen, and whether the researcher has actually used it (anything but a view); and
+ * the researcher's factor vector x_u as last folded in, with the model version it belongs to, so that
+ * the next fold-in under the same version starts from it. Kept per researcher in a RocksDB store; see
+ * {@link InteractionProfileSerde} for the bytes.
  */
 public final class InteractionProfile {
 
@@ -17,13 +19,40 @@ public final class InteractionProfile {
     }
 
     private final Map<String, Entry> entries;
+    private String vectorVersion;
+    private float[] vector;
 
     public InteractionProfile() {
         this.entries = new LinkedHashMap<>();
     }
 
-    InteractionProfile(Map<String, Entry> entries) {
+    InteractionProfile(Map<String, Entry> entries, String vectorVersion, float[] vector) {
         this.entries = entries;
+        this.vectorVersion = vectorVersion;
+        this.vector = vector;
+    }
+
+    /**
+     * The researcher's vector folded in under {@code version}, or null when the last fold-in was under
+     * another version (or none): a vector is only a warm start under the item factors it was fitted to.
+     */
+    public float[] vectorUnder(String version) {
+        return vector != null && version != null && version.equals(vectorVersion) ? vector : null;
+    }
+
+    /** The version the stored vector belongs to, or null. */
+    public String vectorVersion() {
+        return vectorVersion;
+    }
+
+    /** Keeps {@code x} (rounded to float, enough for a warm start) as the vector under {@code version}. */
+    public void keepVector(String version, double[] x) {
+        float[] kept = vector != null && vector.length == x.length ? vector : new float[x.length];
+        for (int f = 0; f < x.length; f++) {
+            kept[f] = (float) x[f];
+        }
+        this.vector = kept;
+        this.vectorVersion = version;
     }
 
     /** Adds one event with weight {@code weight}; modifies this profile. */

@@ -16,11 +16,14 @@ import org.apache.kafka.common.serialization.Serializer;
 /**
  * Binary form of an {@link InteractionProfile}: a format byte, the entry count, then per entry the
  * compound id (modified UTF-8, short), strength (float), event count (int), last seen (epoch ms, long)
- * and a flags byte (bit 0: used). About 20 bytes per compound plus the id.
+ * and a flags byte (bit 0: used) — about 20 bytes per compound plus the id; then (format 2) the
+ * vector's rank (short, 0 for none) and, when there is one, its version (modified UTF-8) and the
+ * factors as floats. Format 1, without the vector, is still read, so stores written before it load.
  */
 public final class InteractionProfileSerde implements Serde<InteractionProfile> {
 
-    private static final byte FORMAT = 1;
+    private static final byte FORMAT_WITHOUT_VECTOR = 1;
+    private static final byte FORMAT = 2;
 
     @Override
     public Serializer<InteractionProfile> serializer() {
@@ -33,7 +36,7 @@ public final class InteractionProfileSerde implements Serde<InteractionProfile> 
     }
 
     static byte[] write(InteractionProfile profile) {
-        ByteArrayOutputStream buffer = new ByteArrayOutputStream(16 + profile.size() * 32);
+        ByteArrayOutputStream buffer = new ByteArrayOutputStream(16 + profile.size() * 32 + 4 * 64 + 16);
         try (DataOutputStream out = new DataOutputStream(buffer)) {
             out.writeByte(FORMAT);
             out.writeInt(profile.size());
@@ -44,6 +47,17 @@ public final class InteractionProfileSerde implements Serde<InteractionProfile> 
                 out.writeLong(e.lastSeenEpochMs());
                 out.writeByte(e.used() ? 1 : 0);
             }
+            String version = profile.vectorVersion();
+            float[] vector = profile.vectorUnder(version);
+            if (vector == null) {
+                out.writeShort(0);
+            } else {
+                out.writeShort(vector.length);
+                out.writeUTF(version);
+                for (float v : vector) {
+                    out.writeFloat(v);
+                }
+            }
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
@@ -53,7 +67,7 @@ public final class InteractionProfileSerde implements Serde<InteractionProfile> 
     static InteractionProfile read(byte[] bytes) {
         try (DataInputStream in = new DataInputStream(new ByteArrayInputStream(bytes))) {
             byte format = in.readByte();
-            if (format != FORMAT) {
+            if (format != FORMAT && format != FORMAT_WITHOUT_VECTOR) {
                 throw new IllegalStateException("unknown interaction profile format " + format);
             }
             int count = in.readInt();
@@ -63,7 +77,19 @@ public final class InteractionProfileSerde implements Serde<InteractionProfile> 
                 entries.put(id, new InteractionProfile.Entry(id, in.readFloat(), in.readInt(), in.readLong(),
                         (in.readByte() & 1) != 0));
             }
-            return new InteractionProfile(entries);
+            if (format == FORMAT_WITHOUT_VECTOR) {
+                return new InteractionProfile(entries, null, null);
+            }
+            int rank = in.readUnsignedShort();
+            if (rank == 0) {
+                return new InteractionProfile(entries, null, null);
+            }
+            String version = in.readUTF();
+            float[] vector = new float[rank];
+            for (int f = 0; f < rank; f++) {
+                vector[f] = in.readFloat();
+            }
+            return new InteractionProfile(entries, version, vector);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

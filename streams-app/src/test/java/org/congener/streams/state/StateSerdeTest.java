@@ -1,6 +1,8 @@
 package org.congener.streams.state;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -31,8 +33,34 @@ class StateSerdeTest {
         for (int i = 0; i < 100; i++) {
             profile.add("c-" + i, 1f, i, true);
         }
-        // per entry: 2 (id length) + id bytes + 4 (strength) + 4 (count) + 8 (last seen) + 1 (flags); header 5
-        assertEquals(5 + 100 * 19 + 10 * 3 + 90 * 4, InteractionProfileSerde.write(profile).length);
+        // per entry: 2 (id length) + id bytes + 4 (strength) + 4 (count) + 8 (last seen) + 1 (flags); header 5;
+        // no vector: a 2-byte rank of 0
+        assertEquals(5 + 100 * 19 + 10 * 3 + 90 * 4 + 2, InteractionProfileSerde.write(profile).length);
+        // a rank-64 vector adds its version (2 + 5 bytes) and 64 floats
+        profile.keepVector("v0001", new double[64]);
+        assertEquals(5 + 100 * 19 + 10 * 3 + 90 * 4 + 2 + 7 + 64 * 4, InteractionProfileSerde.write(profile).length);
+    }
+
+    @Test
+    void shouldKeepTheFoldedVectorOnlyForItsOwnVersionWhenReadBack() {
+        InteractionProfile profile = new InteractionProfile();
+        profile.add("c-1", 1f, 1_000L, true);
+        profile.keepVector("v0002", new double[] {0.25, -1.5, 3.0});
+
+        InteractionProfile back = InteractionProfileSerde.read(InteractionProfileSerde.write(profile));
+
+        assertArrayEquals(new float[] {0.25f, -1.5f, 3.0f}, back.vectorUnder("v0002"));
+        assertNull(back.vectorUnder("v0003"), "a vector is no warm start under other item factors");
+        assertEquals(List.copyOf(profile.entries()), List.copyOf(back.entries()));
+    }
+
+    @Test
+    void shouldReadProfilesWrittenBeforeVectorsWereKept() {
+        // format 1: format byte, count, then one entry "c" with strength 2, 1 event, last seen 7, used
+        byte[] formatOne = {1, 0, 0, 0, 1, 0, 1, 'c', 0x40, 0, 0, 0, 0, 0, 0, 1, 0, 0, 0, 0, 0, 0, 0, 7, 1};
+        InteractionProfile back = InteractionProfileSerde.read(formatOne);
+        assertEquals(new InteractionProfile.Entry("c", 2f, 1, 7L, true), back.get("c"));
+        assertNull(back.vectorVersion());
     }
 
     @Test
