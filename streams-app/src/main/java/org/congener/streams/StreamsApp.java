@@ -19,6 +19,7 @@ import org.apache.kafka.streams.state.HostInfo;
 import org.congener.streams.api.QueryServer;
 import org.congener.streams.api.StoreSuggestionQueries;
 import org.congener.streams.config.AppConfig;
+import org.congener.streams.scoring.SuggestionScorer;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
@@ -33,17 +34,30 @@ public final class StreamsApp implements AutoCloseable {
 
     private final KafkaStreams streams;
     private final QueryServer server;
+    private final ModelAssembler models;
 
-    private StreamsApp(KafkaStreams streams, QueryServer server) {
+    private StreamsApp(KafkaStreams streams, QueryServer server, ModelAssembler models) {
         this.streams = streams;
         this.server = server;
+        this.models = models;
     }
 
     /** Starts Kafka Streams and the query API; returns without waiting for RUNNING. */
     public static StreamsApp start(AppConfig config) {
+        return start(config, null);
+    }
+
+    /**
+     * The same with {@code scorer} in place of the hybrid scorer (null: the hybrid scorer). The
+     * end-to-end benchmark passes a scorer that offers nothing, to measure the platform alone: same
+     * topics, serdes, stores, guarantee and threads, no scoring work.
+     */
+    public static StreamsApp start(AppConfig config, SuggestionScorer scorer) {
         StreamsBuilder builder = new StreamsBuilder();
-        ModelAssembler models = SuggestionTopology.build(builder, SuggestionTopology.Settings.from(config),
-                sharedTerms(config));
+        SuggestionTopology.Settings settings = SuggestionTopology.Settings.from(config);
+        ModelAssembler models = scorer == null
+                ? SuggestionTopology.build(builder, settings, sharedTerms(config))
+                : SuggestionTopology.build(builder, settings, scorer, sharedTerms(config));
         Topology topology = builder.build();
         // open the port first: a taken port fails before Kafka Streams starts anything, and port 0
         // is bound to a real port that can go into application.server
@@ -73,7 +87,7 @@ public final class StreamsApp implements AutoCloseable {
             streams.close(CLOSE_TIMEOUT);
             throw e;
         }
-        return new StreamsApp(streams, server);
+        return new StreamsApp(streams, server, models);
     }
 
     /** The ontology of {@code ontology.file} for the "why" of suggestions, or null when none is set. */
@@ -104,6 +118,12 @@ public final class StreamsApp implements AutoCloseable {
             Thread.sleep(50);
         }
         return false;
+    }
+
+    /** The version this instance scores under now, or null before any is live. */
+    public String liveModelVersion() {
+        var live = models.live();
+        return live == null ? null : live.version();
     }
 
     public KafkaStreams kafkaStreams() {

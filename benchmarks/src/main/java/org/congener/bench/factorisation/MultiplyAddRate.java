@@ -22,7 +22,8 @@ public final class MultiplyAddRate {
         }
     }
 
-    static double best(DenseKernels kernels, int threads, int runs) throws InterruptedException {
+    /** The best of {@code runs} measurements after a warm-up, in multiply-adds per second. */
+    public static double best(DenseKernels kernels, int threads, int runs) throws InterruptedException {
         for (int w = 0; w < 3; w++) {
             measure(kernels, 1);
         }

@@ -8,6 +8,7 @@ import java.time.Instant;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Properties;
 import java.util.SplittableRandom;
@@ -43,22 +44,46 @@ import org.congener.schemas.TopicName;
 import org.congener.schemas.Topics;
 import org.congener.schemas.UsageEvent;
 import org.congener.schemas.UsageKind;
+import org.congener.bench.factorisation.MultiplyAddRate;
+import org.congener.core.factorisation.DenseKernels;
+import org.congener.schemas.SuggestionSource;
 import org.congener.streams.StreamsApp;
+import org.congener.streams.SuggestionTopology;
+import org.congener.streams.scoring.ScoredCandidate;
+import org.congener.streams.scoring.ScoringInput;
+import org.congener.streams.scoring.SuggestionScorer;
+import org.congener.streams.state.InteractionProfile;
+import org.congener.streams.state.InteractionProfileSerde;
 import org.congener.streams.config.AppConfig;
 
 /**
- * Events through a real embedded broker and the real streams app under a published model version:
- * paced at a given rate, latency from event produced to its suggestion list read committed, then an
- * unpaced burst for the sustained rate. Researchers and compounds are drawn with Zipf skew (a few
- * heavy users, a long tail).
+ * Events through a real embedded broker and the real streams app under a published model version, in
+ * two runs on the same broker and world (catalogue, researchers, model version):
+ * <ol>
+ *   <li>the app as it ships: a warm-up burst (JIT, caches), then events paced at a given rate with the
+ *       latency from event produced to its suggestion list read committed, then an unpaced burst whose
+ *       events per second are the sustained rate; then the bytes of the interaction store per
+ *       researcher;</li>
+ *   <li>the platform's ceiling: the same topology, topics, serdes, stores, guarantee and threads with a
+ *       scorer that offers nothing, under the same unpaced burst.</li>
+ * </ol>
+ * Then this machine's multiply-add rate, the multiply-adds the app's scoring does per event (counted
+ * from the researchers' actual history sizes), and the ideal rate 1 / (1/ceiling + work/rate). Researchers
+ * and compounds are drawn with Zipf skew (a few heavy users, a long tail).
  *
  * <p>Arguments: compounds rank researchers rate(events/s) seconds burstEvents.
  */
 public final class StreamsEndToEnd {
 
     private static final int NEIGHBOURS = 20;
+    private static final int WARM_UP_EVENTS = 3_000;
 
     private StreamsEndToEnd() {
+    }
+
+    /** What one run of the pipeline gave. */
+    record RunResult(double p50Ms, double p99Ms, double maxMs, int pacedLists, double sustainedPerSecond,
+                     double storeBytesPerResearcher, long researchersStored) {
     }
 
     public static void main(String[] args) throws Exception {
@@ -74,70 +99,228 @@ public final class StreamsEndToEnd {
         Path dir = Files.createTempDirectory("congener-e2e");
         try (EmbeddedKafkaBroker broker = EmbeddedKafkaBroker.builder().dataDir(dir.resolve("broker")).port(0).start()) {
             String bootstrap = broker.bootstrapServers();
-            String prefix = "e2e.";
-            TopicAdmin.createAll(bootstrap, prefix, 2, (short) 1);
-            Topics topics = new Topics(prefix);
-            long t0 = System.nanoTime();
-            publishWorld(bootstrap, topics, compounds, rank, researchers);
-            System.out.printf("catalogue, researchers and model v0001 published in %.1f s%n", (System.nanoTime() - t0) / 1e9);
+            Workload workload = new Workload(researchers, compounds);
+            RunResult app = run(broker, dir, "e2e.", null, workload, compounds, rank, rate, seconds, burst);
+            RunResult ceiling = run(broker, dir, "e2e-ceiling.", new OffersNothing(), workload, compounds, rank,
+                    0, 0, burst);
+            double fmaRate = MultiplyAddRate.best(DenseKernels.best(), 1, 5);
+            double work = workload.meanMultiplyAddsPerEvent(rank, compounds, NEIGHBOURS);
+            double ideal = 1.0 / (1.0 / ceiling.sustainedPerSecond() + work / fmaRate);
+            System.out.printf(Locale.ROOT, "%n== summary ==%n");
+            System.out.printf(Locale.ROOT, "app: %.0f events/s sustained; paced at %d events/s p50 %.1f ms, p99 %.1f ms,"
+                    + " max %.1f ms over %d lists%n", app.sustainedPerSecond(), rate, app.p50Ms(), app.p99Ms(),
+                    app.maxMs(), app.pacedLists());
+            System.out.printf(Locale.ROOT, "ceiling (same pipeline, scorer offers nothing): %.0f events/s%n",
+                    ceiling.sustainedPerSecond());
+            System.out.printf(Locale.ROOT, "work per event: %.0f multiply-adds (mean history %.1f compounds);"
+                    + " one core's rate %.2f G multiply-adds/s: %.1f µs%n", work, workload.meanHistory(),
+                    fmaRate / 1e9, work / fmaRate * 1e6);
+            System.out.printf(Locale.ROOT, "ideal 1/(1/ceiling + work/rate) = %.0f events/s; app reaches %.2f of it%n",
+                    ideal, app.sustainedPerSecond() / ideal);
+            System.out.printf(Locale.ROOT, "interaction store: %.0f bytes per researcher over %d researchers%n",
+                    app.storeBytesPerResearcher(), app.researchersStored());
+            System.out.printf(Locale.ROOT, "broker and state dirs after the runs: %.1f MB%n", sizeMb(dir));
+        }
+    }
 
-            AppConfig config = AppConfig.defaults().with(Map.of(
-                    AppConfig.BOOTSTRAP_SERVERS, bootstrap,
-                    AppConfig.TOPIC_PREFIX, prefix,
-                    AppConfig.APPLICATION_ID, "e2e-bench",
-                    AppConfig.STATE_DIR, dir.resolve("state").toString(),
-                    AppConfig.HTTP_PORT, "0"));
-            try (StreamsApp app = StreamsApp.start(config)) {
-                if (!app.awaitRunning(Duration.ofMinutes(3))) {
-                    throw new IllegalStateException("streams app did not reach RUNNING");
-                }
-                Thread.sleep(2_000);
-                Map<String, Long> producedAt = new ConcurrentHashMap<>();
-                List<Long> latenciesNs = java.util.Collections.synchronizedList(new ArrayList<>());
-                AtomicBoolean stop = new AtomicBoolean();
-                Thread reader = new Thread(() -> readSuggestions(bootstrap, topics, producedAt, latenciesNs, stop));
-                reader.start();
+    /** One pipeline run on its own topics; {@code scorer} null is the app as it ships. */
+    private static RunResult run(EmbeddedKafkaBroker broker, Path dir, String prefix, SuggestionScorer scorer,
+                                 Workload workload, int compounds, int rank, int rate, int seconds, int burst)
+            throws Exception {
+        String bootstrap = broker.bootstrapServers();
+        String label = scorer == null ? "app" : "ceiling";
+        TopicAdmin.createAll(bootstrap, prefix, 2, (short) 1);
+        Topics topics = new Topics(prefix);
+        long t0 = System.nanoTime();
+        publishWorld(bootstrap, topics, compounds, rank, workload.researchers());
+        System.out.printf("[%s] catalogue, researchers and model v0001 published in %.1f s%n", label,
+                (System.nanoTime() - t0) / 1e9);
 
-                Zipf users = new Zipf(researchers, 1.0);
-                Zipf items = new Zipf(compounds, 0.9);
-                SplittableRandom random = new SplittableRandom(11);
-                int paced = rate * seconds;
+        AppConfig config = AppConfig.defaults().with(Map.of(
+                AppConfig.BOOTSTRAP_SERVERS, bootstrap,
+                AppConfig.TOPIC_PREFIX, prefix,
+                AppConfig.APPLICATION_ID, prefix + "bench",
+                AppConfig.STATE_DIR, dir.resolve(prefix + "state").toString(),
+                AppConfig.HTTP_PORT, "0",
+                AppConfig.PROCESSING_GUARANTEE, System.getProperty("guarantee", "exactly_once_v2")));
+        try (StreamsApp app = StreamsApp.start(config, scorer)) {
+            if (!app.awaitRunning(Duration.ofMinutes(3))) {
+                throw new IllegalStateException("streams app did not reach RUNNING");
+            }
+            awaitLiveModel(app);
+            Map<String, Long> producedAt = new ConcurrentHashMap<>();
+            List<Long> latenciesNs = java.util.Collections.synchronizedList(new ArrayList<>());
+            AtomicBoolean stop = new AtomicBoolean();
+            Thread reader = new Thread(() -> readSuggestions(bootstrap, topics, producedAt, latenciesNs, stop));
+            reader.start();
+            Thread.sleep(1_000);
+            SplittableRandom random = new SplittableRandom(scorer == null ? 11 : 12);
+
+            unpaced(bootstrap, topics, "w", WARM_UP_EVENTS, workload, random, producedAt, latenciesNs, null);
+            System.out.printf("[%s] warm-up: %d events%n", label, WARM_UP_EVENTS);
+
+            RunResult paced = null;
+            int pacedCount = rate * seconds;
+            if (pacedCount > 0) {
+                latenciesNs.clear();
                 try (KafkaProducer<String, String> producer = producer(bootstrap)) {
                     long start = System.nanoTime();
-                    for (int e = 0; e < paced; e++) {
+                    for (int e = 0; e < pacedCount; e++) {
                         long due = start + (long) (e * 1e9 / rate);
                         while (System.nanoTime() < due) {
                             Thread.onSpinWait();
                         }
-                        send(producer, topics, "p" + e, users.next(random), items.next(random), random, producedAt);
+                        send(producer, topics, "p" + e, workload, random, producedAt, null);
                     }
                     producer.flush();
                 }
-                awaitCount(latenciesNs, paced, Duration.ofSeconds(120));
-                List<Long> measured = new ArrayList<>(latenciesNs.subList(paced / 5, Math.min(paced, latenciesNs.size())));
-                report("paced at " + rate + " events/s (first fifth left out as warm-up)", measured);
-
-                latenciesNs.clear();
-                long burstStart = System.nanoTime();
-                try (KafkaProducer<String, String> producer = producer(bootstrap)) {
-                    for (int e = 0; e < burst; e++) {
-                        send(producer, topics, "b" + e, users.next(random), items.next(random), random, producedAt);
-                    }
-                    producer.flush();
-                }
-                awaitCount(latenciesNs, burst, Duration.ofMinutes(10));
-                double secs = (System.nanoTime() - burstStart) / 1e9;
-                System.out.printf("sustained: %d events in %.1f s = %.0f events/s (%d lists seen)%n",
-                        burst, secs, latenciesNs.size() / secs, latenciesNs.size());
-                stop.set(true);
-                reader.join();
-                System.out.printf("state dir after the run: %.1f MB%n", sizeMb(dir.resolve("state")));
+                awaitCount(latenciesNs, pacedCount, Duration.ofSeconds(120));
+                long[] v = sorted(latenciesNs);
+                paced = new RunResult(v[v.length / 2] / 1e6, v[(int) Math.min(v.length - 1, Math.round(v.length * 0.99))] / 1e6,
+                        v[v.length - 1] / 1e6, v.length, 0, 0, 0);
+                System.out.printf(Locale.ROOT, "[%s] paced at %d events/s: %d lists, p50 %.1f ms, p99 %.1f ms, max %.1f ms%n",
+                        label, rate, v.length, paced.p50Ms(), paced.p99Ms(), paced.maxMs());
             }
+
+            double perSecond = unpaced(bootstrap, topics, "b", burst, workload, random, producedAt, latenciesNs,
+                    scorer == null ? workload : null);
+            System.out.printf(Locale.ROOT, "[%s] sustained: %d events at %.0f events/s%n", label, burst, perSecond);
+            stop.set(true);
+            reader.join();
+            long[] store = scorer == null ? interactionStoreBytes(app) : new long[] {0, 0};
+            double perResearcher = store[1] == 0 ? 0 : (double) store[0] / store[1];
+            return paced == null
+                    ? new RunResult(0, 0, 0, 0, perSecond, perResearcher, store[1])
+                    : new RunResult(paced.p50Ms(), paced.p99Ms(), paced.maxMs(), paced.pacedLists(), perSecond,
+                    perResearcher, store[1]);
         }
     }
 
-    private static void send(KafkaProducer<String, String> producer, Topics topics, String id, int user, int item,
-                             SplittableRandom random, Map<String, Long> producedAt) {
+    /**
+     * Sends {@code count} events at once and waits for their lists; returns lists per second from the
+     * first send to the last list read. {@code counting} (or null) records each event's history size.
+     */
+    private static double unpaced(String bootstrap, Topics topics, String idPrefix, int count, Workload workload,
+                                  SplittableRandom random, Map<String, Long> producedAt, List<Long> latenciesNs,
+                                  Workload counting) throws InterruptedException {
+        latenciesNs.clear();
+        long start = System.nanoTime();
+        try (KafkaProducer<String, String> producer = producer(bootstrap)) {
+            for (int e = 0; e < count; e++) {
+                send(producer, topics, idPrefix + e, workload, random, producedAt, counting);
+            }
+            producer.flush();
+        }
+        awaitCount(latenciesNs, count, Duration.ofMinutes(10));
+        double secs = (System.nanoTime() - start) / 1e9;
+        if (latenciesNs.size() < count) {
+            throw new IllegalStateException("only " + latenciesNs.size() + " of " + count + " lists arrived");
+        }
+        return count / secs;
+    }
+
+    private static void awaitLiveModel(StreamsApp app) throws InterruptedException {
+        long deadline = System.nanoTime() + Duration.ofMinutes(3).toNanos();
+        while (app.liveModelVersion() == null && System.nanoTime() < deadline) {
+            Thread.sleep(100);
+        }
+        if (app.liveModelVersion() == null) {
+            throw new IllegalStateException("no model version went live");
+        }
+    }
+
+    /** Total serialized bytes and count of the researcher profiles in the interaction store. */
+    private static long[] interactionStoreBytes(StreamsApp app) {
+        var store = app.kafkaStreams().store(org.apache.kafka.streams.StoreQueryParameters.fromNameAndType(
+                SuggestionTopology.INTERACTIONS_STORE,
+                org.apache.kafka.streams.state.QueryableStoreTypes.<String, InteractionProfile>keyValueStore()));
+        var serializer = new InteractionProfileSerde().serializer();
+        long bytes = 0;
+        long count = 0;
+        try (var all = store.all()) {
+            while (all.hasNext()) {
+                var kv = all.next();
+                bytes += kv.key.getBytes(StandardCharsets.UTF_8).length + serializer.serialize("", kv.value).length;
+                count++;
+            }
+        }
+        return new long[] {bytes, count};
+    }
+
+    private static long[] sorted(List<Long> ns) {
+        synchronized (ns) {
+            return ns.stream().mapToLong(Long::longValue).sorted().toArray();
+        }
+    }
+
+    /** A scorer that offers nothing: the pipeline's cost without the scoring work. */
+    static final class OffersNothing implements SuggestionScorer {
+        @Override
+        public SuggestionSource source() {
+            return SuggestionSource.HYBRID;
+        }
+
+        @Override
+        public List<ScoredCandidate> rank(ScoringInput input, int n) {
+            return List.of();
+        }
+    }
+
+    /**
+     * Who acts on what: Zipf-skewed researchers and compounds, and each researcher's distinct compounds
+     * so far, from which the work per event is counted.
+     */
+    static final class Workload {
+        private final int researchers;
+        private final Zipf users;
+        private final Zipf items;
+        private final Map<Integer, java.util.Set<Integer>> history = new java.util.HashMap<>();
+        private long countedEvents;
+        private long historySum;
+
+        Workload(int researchers, int compounds) {
+            this.researchers = researchers;
+            this.users = new Zipf(researchers, 1.0);
+            this.items = new Zipf(compounds, 0.9);
+        }
+
+        int researchers() {
+            return researchers;
+        }
+
+        int[] next(SplittableRandom random, boolean count) {
+            int user = users.next(random);
+            int item = items.next(random);
+            java.util.Set<Integer> seen = history.computeIfAbsent(user, u -> new java.util.HashSet<>());
+            seen.add(item);
+            if (count) {
+                countedEvents++;
+                historySum += seen.size();
+            }
+            return new int[] {user, item};
+        }
+
+        double meanHistory() {
+            return countedEvents == 0 ? 0 : (double) historySum / countedEvents;
+        }
+
+        /**
+         * Multiply-adds of one event's scoring at the mean history n_u, counted from the code's loops:
+         * exact fold-in n_u·k(k+1)/2 (rank-one updates of the upper triangle) + n_u·k (right-hand side)
+         * + k³/6 (Cholesky) + k² (two triangular solves); CF scores I·k; semantic spread n_u·K.
+         */
+        double meanMultiplyAddsPerEvent(int k, int items, int neighbours) {
+            double n = meanHistory();
+            return n * k * (k + 1) / 2.0 + n * k + k * (double) k * k / 6 + (double) k * k
+                    + (double) items * k + n * neighbours;
+        }
+    }
+
+    private static void send(KafkaProducer<String, String> producer, Topics topics, String id, Workload workload,
+                             SplittableRandom random, Map<String, Long> producedAt, Workload counting) {
+        int[] who = workload.next(random, counting != null);
+        int user = who[0];
+        int item = who[1];
         UsageKind kind = UsageKind.values()[random.nextInt(UsageKind.values().length)];
         String researcher = researcherId(user);
         UsageEvent event = new UsageEvent(SchemaIds.USAGE_EVENT, id, researcher, compoundId(item), kind,
@@ -189,17 +372,6 @@ public final class StreamsEndToEnd {
         while (list.size() < expected && System.nanoTime() < deadline) {
             Thread.sleep(50);
         }
-    }
-
-    private static void report(String what, List<Long> ns) {
-        long[] v = ns.stream().mapToLong(Long::longValue).sorted().toArray();
-        if (v.length == 0) {
-            System.out.println(what + ": no lists seen");
-            return;
-        }
-        System.out.printf("%s: %d lists, latency p50 %.1f ms, p99 %.1f ms, max %.1f ms%n", what, v.length,
-                v[v.length / 2] / 1e6, v[(int) Math.min(v.length - 1, Math.round(v.length * 0.99))] / 1e6,
-                v[v.length - 1] / 1e6);
     }
 
     private static void publishWorld(String bootstrap, Topics topics, int compounds, int rank, int researchers) {
