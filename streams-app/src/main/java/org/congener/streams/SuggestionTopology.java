@@ -22,7 +22,7 @@ import org.congener.streams.config.AppConfig;
 import org.congener.streams.processor.Intake;
 import org.congener.streams.processor.SuggestionProcessor;
 import org.congener.streams.processor.UsageEventIntake;
-import org.congener.streams.scoring.GroupPopularityScorer;
+import org.congener.streams.scoring.ColdStartScorer;
 import org.congener.core.interactions.InteractionWeights;
 import org.congener.streams.model.ModelAssembler;
 import org.congener.streams.model.SharedTerms;
@@ -91,8 +91,8 @@ public final class SuggestionTopology {
     }
 
     /**
-     * The topology with the hybrid scorer: live model versions once one is complete, group popularity
-     * before. Returns the instance's model assembler (its live snapshot is what events are scored under).
+     * The topology with the hybrid scorer: live model versions once one is complete, ontology
+     * similarity and group popularity before ({@link ColdStartScorer}). Returns the instance's model assembler (its live snapshot is what events are scored under).
      */
     public static ModelAssembler build(StreamsBuilder builder, Settings settings) {
         return build(builder, settings, (SharedTerms) null);
@@ -100,7 +100,7 @@ public final class SuggestionTopology {
 
     /** The same, naming in each suggestion the ontology class it shares with its top contributor. */
     public static ModelAssembler build(StreamsBuilder builder, Settings settings, SharedTerms sharedTerms) {
-        GroupPopularityScorer coldStart = new GroupPopularityScorer(settings.popularityHalfLife().toMillis());
+        ColdStartScorer coldStart = new ColdStartScorer(settings.popularityHalfLife().toMillis());
         return build(builder, settings, new HybridScorer(coldStart), sharedTerms);
     }
 

@@ -314,6 +314,36 @@ class LiveModelTopologyTest {
     }
 
     @Test
+    void shouldRankByOntologyAndGroupPopularityBeforeAnyVersionWhenAnOntologyIsGiven() throws Exception {
+        org.congener.core.ontology.Ontology ontology =
+                new org.congener.core.ontology.io.OboReader().read(new java.io.StringReader(OBO));
+        start(false, new org.congener.streams.model.SharedTerms(ontology));
+
+        Suggestions first = send("ada", "c-ethanol", UsageKind.ORDER);
+        assertEquals(SuggestionSource.SEMANTIC_AND_POPULARITY, first.source());
+        assertNull(first.modelVersion());
+        // newcomer shares "alcohol" with ethanol, acetone only "organic solvent": Lin ranks newcomer first;
+        // toluene has no term in this ontology and nobody in the group used anything else yet
+        assertEquals(List.of("c-newcomer", "c-acetone"), ids(first));
+        Suggestion top = first.items().get(0);
+        assertTrue(top.semanticScore() > first.items().get(1).semanticScore() && first.items().get(1).semanticScore() > 0);
+        assertEquals(0.5, top.fusedScore(), 1e-12, "the best semantic score, normalised, times the weight 0.5; no popularity");
+        assertEquals("c-ethanol", top.contributors().get(0).compoundId());
+
+        // a colleague in ada's group orders toluene: it enters ada's next list through group popularity
+        send("ben", "c-toluene", UsageKind.ORDER);
+        Suggestions next = send("ada", "c-acetone", UsageKind.VIEW);
+        assertTrue(ids(next).contains("c-toluene"), ids(next).toString());
+        Suggestion toluene = next.items().stream().filter(i -> i.compoundId().equals("c-toluene")).findFirst().orElseThrow();
+        assertEquals(0.0, toluene.semanticScore());
+        assertEquals(0.5, toluene.fusedScore(), 1e-6, "the group's only popular compound, normalised, times 0.5");
+
+        // once a version is live the same researcher gets hybrid lists
+        publish(version("v0001", FusionSettings.blend(0.5), 1));
+        assertEquals(SuggestionSource.HYBRID, send("ada", "c-acetone", UsageKind.VIEW).source());
+    }
+
+    @Test
     void shouldSkipAnUnreadableFactorRecordAndKeepTheVersionOffUntilItsRecordIsWhole() {
         ModelVersions.Version v1 = version("v0001", FusionSettings.blend(0.5), 1);
         TestInputTopic<String, String> rawFactors = driver.createInputTopic("lab.model-item-factors",

@@ -6,15 +6,9 @@ import java.util.List;
 import java.util.Map;
 import org.congener.core.fusion.NeighbourLists;
 import org.congener.core.interactions.IdIndex;
-import org.congener.core.ontology.CompoundTerms;
 import org.congener.core.ontology.Ontology;
-import org.congener.core.ontology.ic.InformationContent;
-import org.congener.core.ontology.ic.SecoIntrinsicIc;
+import org.congener.core.ontology.neighbours.CatalogueNeighbours;
 import org.congener.core.ontology.neighbours.NeighbourCache;
-import org.congener.core.ontology.neighbours.NeighbourCacheSettings;
-import org.congener.core.ontology.similarity.Aggregation;
-import org.congener.core.ontology.similarity.CompoundSimilarity;
-import org.congener.core.ontology.similarity.LinSimilarity;
 import org.congener.schemas.Neighbour;
 
 /**
@@ -37,19 +31,8 @@ public final class OntologyNeighbours {
         for (String id : items.ids()) {
             termIds.put(id, catalogTerms == null ? List.of(id) : catalogTerms.getOrDefault(id, List.of()));
         }
-        int[] unknown = new int[1];
-        Map<String, int[]> resolved = CompoundTerms.resolve(ontology, termIds, (compound, term) -> unknown[0]++);
-        InformationContent ic = SecoIntrinsicIc.compute(ontology);
-        CompoundSimilarity similarity = new CompoundSimilarity(new LinSimilarity(ontology, ic), Aggregation.MAX);
-        Map<String, int[]> withTerms = new LinkedHashMap<>();
-        resolved.forEach((id, terms) -> {
-            if (terms.length > 0) {
-                withTerms.put(id, terms);
-            }
-        });
-        NeighbourCache cache = NeighbourCache.build(withTerms, similarity,
-                NeighbourCacheSettings.defaults().withK(k).withThreads(Math.max(1, threads)));
-        return new Result(toNeighbourLists(cache, items), items.size() - withTerms.size(), unknown[0]);
+        CatalogueNeighbours.Result built = CatalogueNeighbours.build(ontology, termIds, k, threads);
+        return new Result(toNeighbourLists(built.cache(), items), built.compoundsWithoutTerms(), built.unknownTermIds());
     }
 
     /** The cache's lists re-indexed by {@code items}; neighbours outside {@code items} are dropped. */

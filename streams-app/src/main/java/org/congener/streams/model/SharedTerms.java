@@ -29,6 +29,15 @@ public final class SharedTerms {
         this.measure = new LinSimilarity(ontology, SecoIntrinsicIc.compute(ontology));
     }
 
+    public Ontology ontology() {
+        return ontology;
+    }
+
+    /** The intrinsic IC this instance computed once for the ontology. */
+    public org.congener.core.ontology.ic.InformationContent informationContent() {
+        return measure.informationContent();
+    }
+
     /** The most informative class shared by the two term lists, or empty when they share none. */
     public Optional<Term> mostInformativeShared(List<String> termsOfSuggestion, List<String> termsOfPast) {
         int best = -1;

@@ -17,6 +17,18 @@ final class GlobalLookup<V> {
         return new GlobalLookup<>(context.getStateStore(storeName));
     }
 
+    /** Every entry, in key order. */
+    void forEach(java.util.function.BiConsumer<String, V> action) {
+        try (var all = store.all()) {
+            while (all.hasNext()) {
+                var entry = all.next();
+                if (entry.value != null && entry.value.value() != null) {
+                    action.accept(entry.key, entry.value.value());
+                }
+            }
+        }
+    }
+
     /** The current value for {@code key}, or null when there is none. */
     V get(String key) {
         if (key == null) {

@@ -19,7 +19,9 @@ import org.congener.schemas.UsageEvent;
 import org.congener.schemas.UsageKind;
 import org.congener.core.interactions.InteractionWeights;
 import org.congener.streams.model.LiveModel;
+import org.congener.streams.model.CatalogueSimilarity;
 import org.congener.streams.model.SharedTerms;
+import org.congener.streams.scoring.SimilarCompounds;
 import org.congener.streams.SafetyCaution;
 import org.congener.streams.scoring.CandidateFilter;
 import org.congener.streams.scoring.ScoredCandidate;
@@ -37,7 +39,8 @@ import org.slf4j.LoggerFactory;
  * the researcher's new top-N as JSON both to {@code suggestions} and to the queryable store of latest
  * lists — serialised once for both.
  *
- * <p>Before any model version is live the cold-start scorer ranks by group popularity; that popularity
+ * <p>Before any model version is live the cold-start scorer ranks by ontology similarity to the
+ * researcher's past compounds (when an ontology is configured) and group popularity; that popularity
  * is kept only while no version is live (it serves nothing afterwards and would cost a store read and
  * write per event), and only over the group's members whose partitions this task holds.
  */
@@ -58,7 +61,11 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
     private final int topN;
     private final boolean inStockOnly;
     private final SharedTerms sharedTerms;
+    /** Neighbours per compound in the cold-start lists: the trainer's default K. */
+    static final int COLD_START_NEIGHBOURS = org.congener.core.ontology.neighbours.NeighbourCacheSettings.DEFAULT_K;
+
     private final Serializer<Suggestions> listWriter;
+    private final CatalogueSimilarity catalogueSimilarity;
     private ProcessorContext<String, byte[]> context;
     private KeyValueStore<String, InteractionProfile> interactions;
     private KeyValueStore<String, GroupPopularity> groups;
@@ -75,6 +82,9 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
                                InteractionWeights coldStartWeights, double halfLifeMs, int topN, boolean inStockOnly,
                                SharedTerms sharedTerms, Serializer<Suggestions> listWriter) {
         this.listWriter = listWriter;
+        // one per processor (per task): the lists are built on the task's own thread, no sharing
+        this.catalogueSimilarity = sharedTerms == null ? null
+                : new CatalogueSimilarity(sharedTerms.ontology(), sharedTerms.informationContent(), COLD_START_NEIGHBOURS);
         this.inStockOnly = inStockOnly;
         this.sharedTerms = sharedTerms;
         this.stores = stores;
@@ -128,7 +138,9 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         if (inStockOnly) {
             eligible = eligible.and(this::inStock);
         }
-        ScoringInput input = new ScoringInput(researcher, profile, group, at, eligible, model);
+        SimilarCompounds similar = model == null && catalogueSimilarity != null
+                ? catalogueSimilarity.current(this::catalogueTerms, context.currentSystemTimeMs()) : null;
+        ScoringInput input = new ScoringInput(researcher, profile, group, at, eligible, model, similar);
         // the scorer keeps the folded vector in the profile, so the profile is written after scoring
         List<ScoredCandidate> ranked = scorer.rank(input, topN);
         interactions.put(event.researcherId(), profile);
@@ -169,6 +181,13 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
     private boolean inStock(String compoundId) {
         InventoryEvent lastStock = stock.get(compoundId);
         return lastStock != null && lastStock.quantityOnHand() > 0;
+    }
+
+    /** Compound id → ontology term ids of every catalogue entry, for the cold-start neighbour lists. */
+    private java.util.Map<String, List<String>> catalogueTerms() {
+        java.util.Map<String, List<String>> terms = new java.util.LinkedHashMap<>();
+        catalog.forEach((id, entry) -> terms.put(id, entry.termIds()));
+        return terms;
     }
 
     private static <T> T orNew(T value, java.util.function.Supplier<T> fresh) {

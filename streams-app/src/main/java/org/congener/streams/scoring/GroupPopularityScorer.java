@@ -37,6 +37,9 @@ public final class GroupPopularityScorer implements SuggestionScorer {
     public List<ScoredCandidate> rank(ScoringInput input, int n) {
         // score everything first (cheap), then check eligibility best-first and stop at n: the check
         // reads the catalogue, which costs far more than the arithmetic
+        if (input.group() == null) {
+            return List.of();
+        }
         List<ScoredCandidate> all = new ArrayList<>(input.group().size());
         for (Map.Entry<String, GroupPopularity.Score> entry : input.group().scores().entrySet()) {
             double popularity = input.group().at(entry.getKey(), input.atEpochMs(), halfLifeMs);
