@@ -1,6 +1,7 @@
 package org.congener.streams;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.net.URI;
@@ -235,6 +236,22 @@ class StreamsAppIntegrationTest {
                 Suggestions streamed = out.stream().filter(s -> lastEvent.equals(s.causedByEventId())).findFirst().orElseThrow();
                 assertEquals(batch, streamed.items().stream().map(i -> i.compoundId()).toList(), researcher);
             }
+
+            // the alternatives of a compound name each one from the catalogue, over real HTTP
+            HttpResponse<String> alternatives = http.send(HttpRequest.newBuilder(
+                    URI.create(app.baseUrl() + "/compounds/c-ethanol/alternatives?n=3")).GET().build(),
+                    HttpResponse.BodyHandlers.ofString());
+            assertEquals(200, alternatives.statusCode(), alternatives.body());
+            JsonNode byOntology = json.readTree(alternatives.body()).get("byOntology");
+            assertEquals("c-precursor", byOntology.get(0).get("compoundId").asText());
+            assertEquals(catalog.get("c-precursor").name(), byOntology.get(0).get("name").asText());
+            assertFalse(byOntology.get(0).get("inStock").asBoolean(), "no inventory event was published");
+            // nothing is in stock, so the in-stock view of a list is empty
+            HttpResponse<String> inStock = http.send(HttpRequest.newBuilder(
+                    URI.create(app.baseUrl() + "/researchers/ada/suggestions?inStock=true")).GET().build(),
+                    HttpResponse.BodyHandlers.ofString());
+            assertEquals(200, inStock.statusCode(), inStock.body());
+            assertEquals(0, json.readTree(inStock.body()).get("items").size());
         }
     }
 

@@ -27,7 +27,10 @@ import org.congener.streams.model.Alternatives;
 /**
  * The query API on the JDK's HTTP server:
  * <ul>
- *   <li>{@code GET /researchers/{id}/suggestions?n=} — the latest list, at most n items (default all);</li>
+ *   <li>{@code GET /researchers/{id}/suggestions?n=&inStock=} — the latest list, at most n items
+ *       (default all); with inStock=true only its items in stock now, in the list's order (so possibly
+ *       fewer than n: the list is the top-N of everything the researcher may order, and a list of
+ *       in-stock compounds only is the instance setting {@code suggestions.in.stock.only});</li>
  *   <li>{@code GET /compounds/{id}/alternatives?n=&inStock=} — similar active compounds by ontology and
  *       by co-use under the live version (n from 1 to 50, default 10; inStock true or false);</li>
  *   <li>{@code GET /health} — the app's state.</li>
@@ -146,9 +149,13 @@ public final class QueryServer implements AutoCloseable {
             return error(400, e.getMessage());
         }
         for (String name : params.keySet()) {
-            if (!name.equals("n")) {
-                return error(400, "unknown parameter '" + name + "' (only n is supported)");
+            if (!name.equals("n") && !name.equals("inStock")) {
+                return error(400, "unknown parameter '" + name + "' (n and inStock are supported)");
             }
+        }
+        Boolean inStock = flag(params, "inStock");
+        if (inStock == null) {
+            return error(400, "inStock must be true or false, got '" + params.get("inStock") + "'");
         }
         int n = queries.maxItems();
         if (params.containsKey("n")) {
@@ -171,7 +178,10 @@ public final class QueryServer implements AutoCloseable {
                     + "': they appear after the researcher's first usage event");
         }
         Suggestions s = latest.get();
-        List<org.congener.schemas.Suggestion> items = s.items().subList(0, Math.min(n, s.items().size()));
+        List<org.congener.schemas.Suggestion> items = s.items().stream()
+                .filter(item -> !inStock || queries.isInStock(item.compoundId()))
+                .limit(n)
+                .toList();
         return new Response(200, new Suggestions(s.schema(), s.researcherId(), s.modelVersion(), s.source(),
                 s.causedByEventId(), s.generatedAt(), items, SafetyCaution.TEXT));
     }
@@ -200,13 +210,9 @@ public final class QueryServer implements AutoCloseable {
                 return error(400, "n must be a whole number from 1 to " + MAX_ALTERNATIVES + ", got '" + value + "'");
             }
         }
-        boolean inStock = false;
-        if (params.containsKey("inStock")) {
-            String value = params.get("inStock");
-            if (!value.equals("true") && !value.equals("false")) {
-                return error(400, "inStock must be true or false, got '" + value + "'");
-            }
-            inStock = value.equals("true");
+        Boolean inStock = flag(params, "inStock");
+        if (inStock == null) {
+            return error(400, "inStock must be true or false, got '" + params.get("inStock") + "'");
         }
         if (!queries.isKnownCompound(compoundId)) {
             return error(404, "unknown compound '" + compoundId + "'");
@@ -220,6 +226,12 @@ public final class QueryServer implements AutoCloseable {
         body.put("byCoUse", lists.byCoUse());
         body.put("caution", SafetyCaution.TEXT);
         return new Response(200, body);
+    }
+
+    /** A true/false parameter: false when absent, null when its value is neither. */
+    private static Boolean flag(Map<String, String> params, String name) {
+        String value = params.getOrDefault(name, "false");
+        return value.equals("true") ? Boolean.TRUE : value.equals("false") ? Boolean.FALSE : null;
     }
 
     static Map<String, String> parseQuery(String rawQuery) {

@@ -115,15 +115,30 @@ public final class StoreSuggestionQueries implements SuggestionQueries {
                 if (entry == null || !entry.active()) {
                     return false;
                 }
-                if (!inStockOnly) {
-                    return true;
-                }
-                InventoryEvent last = stock.get(id);
-                return last != null && last.quantityOnHand() > 0;
+                return !inStockOnly || inStock(stock, id);
+            }).map(a -> {
+                CatalogEntry entry = catalog.get(a.compoundId());
+                return a.withFacts(entry.name(), inStock(stock, a.compoundId()), entry.hazardCodes());
             });
         } catch (InvalidStateStoreException e) {
             throw notReady(app, SuggestionTopology.CATALOG_STORE);
         }
+    }
+
+    @Override
+    public boolean isInStock(String compoundId) {
+        KafkaStreams app = running();
+        try {
+            return inStock(store(app, SuggestionTopology.STOCK_STORE), compoundId);
+        } catch (InvalidStateStoreException e) {
+            throw notReady(app, SuggestionTopology.STOCK_STORE);
+        }
+    }
+
+    /** In stock: the compound's latest inventory event has quantity on hand above zero. */
+    private static boolean inStock(ReadOnlyKeyValueStore<String, InventoryEvent> stock, String compoundId) {
+        InventoryEvent last = stock.get(compoundId);
+        return last != null && last.quantityOnHand() > 0;
     }
 
     @Override

@@ -33,6 +33,11 @@ public interface SuggestionQueries {
         throw new NotReadyException("no model version is live yet; alternatives need one");
     }
 
+    /** Whether the compound's latest inventory event has quantity on hand above zero. */
+    default boolean isInStock(String compoundId) {
+        return false;
+    }
+
     /** The app's state for {@code /health}. */
     Health health();
 

@@ -15,13 +15,31 @@ import org.congener.core.fusion.OneResearcherScoring;
  */
 public final class Alternatives {
 
-    /** One alternative with the similarity that placed it. */
-    public record Alternative(String compoundId, double similarity) {
+    /**
+     * One alternative with the similarity that placed it and, once {@link #withFacts} was applied, the
+     * catalogue facts a person needs to act on it (name, stock, hazard statement codes).
+     */
+    public record Alternative(String compoundId, String name, double similarity, Boolean inStock,
+                              List<String> hazardCodes) {
+
+        public Alternative(String compoundId, double similarity) {
+            this(compoundId, null, similarity, null, List.of());
+        }
+
+        public Alternative withFacts(String name, boolean inStock, List<String> hazardCodes) {
+            return new Alternative(compoundId, name, similarity, inStock, List.copyOf(hazardCodes));
+        }
     }
 
     /** Both lists of one request. */
     public record Lists(String compoundId, String modelVersion, List<Alternative> byOntology,
                         List<Alternative> byCoUse) {
+
+        /** The same lists with each alternative passed through {@code describe}. */
+        public Lists map(java.util.function.UnaryOperator<Alternative> describe) {
+            return new Lists(compoundId, modelVersion, byOntology.stream().map(describe).toList(),
+                    byCoUse.stream().map(describe).toList());
+        }
     }
 
     private Alternatives() {

@@ -64,6 +64,11 @@ class QueryServerTest {
             }
 
             @Override
+            public boolean isInStock(String compoundId) {
+                return !compoundId.equals("c-1");
+            }
+
+            @Override
             public Alternatives.Lists alternatives(String compoundId, int n, boolean inStockOnly) {
                 List<Alternatives.Alternative> all = List.of(new Alternatives.Alternative("c-2", 0.8),
                         new Alternatives.Alternative("c-3", 0.5));
@@ -99,6 +104,20 @@ class QueryServerTest {
         assertEquals(SafetyCaution.TEXT, body.get("caution").asText(), "every answer carries the caution");
         assertTrue(response.headers().firstValue("Content-Type").orElse("").startsWith("application/json"));
         return body;
+    }
+
+    @Test
+    void shouldKeepOnlyItemsInStockNowInListOrderWhenInStockIsAskedFor() throws Exception {
+        HttpResponse<String> response = send("GET", "/researchers/ada/suggestions?inStock=true&n=3");
+        assertEquals(200, response.statusCode());
+        JsonNode items = body(response).get("items");
+        assertEquals(2, items.size(), "c-1 is out of stock now");
+        assertEquals("c-2", items.get(0).get("compoundId").asText());
+        assertEquals("c-3", items.get(1).get("compoundId").asText());
+        assertEquals(3, body(send("GET", "/researchers/ada/suggestions?inStock=false")).get("items").size());
+        HttpResponse<String> bad = send("GET", "/researchers/ada/suggestions?inStock=maybe");
+        assertEquals(400, bad.statusCode());
+        assertTrue(body(bad).get("error").asText().contains("inStock must be true or false"));
     }
 
     @Test
