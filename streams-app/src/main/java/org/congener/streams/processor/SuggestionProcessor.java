@@ -121,11 +121,12 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         InteractionWeights weights = model == null ? coldStartWeights : model.settings().weights();
         Instant occurred = Instant.parse(event.occurredAt());
         long at = occurred.toEpochMilli();
-        // the strength is added as of the event's own time: decay, if any, is not applied to stored sums
+        // the event's weight as of its own time; the profile decays stored sums (if the weights have a half-life)
         float weight = (float) weights.contribution(event.kind(), event.quantity(), occurred, occurred);
+        double strengthHalfLifeMs = weights.halfLife() == null ? 0 : weights.halfLife().toMillis();
 
         InteractionProfile profile = orNew(interactions.get(event.researcherId()), InteractionProfile::new);
-        profile.add(event.compoundId(), weight, at, event.kind() != UsageKind.VIEW);
+        profile.add(event.compoundId(), weight, at, event.kind() != UsageKind.VIEW, strengthHalfLifeMs);
 
         GroupPopularity group = null;
         if (model == null) {

@@ -48,7 +48,7 @@ public final class HybridScorer implements SuggestionScorer {
         if (model == null) {
             return coldStart.rank(input, n);
         }
-        Row row = Row.of(input.profile(), model);
+        Row row = Row.of(input.profile(), model, input.atEpochMs());
         OneResearcherScoring.Scores scores = OneResearcherScoring.score(model.foldIn(), model.itemFactors(),
                 model.neighbours(), model.settings().fusion(), row.items, row.strengths);
         input.profile().keepVector(model.version(), scores.vector());
@@ -94,15 +94,19 @@ public final class HybridScorer implements SuggestionScorer {
 
     /** The researcher's interactions in the model's index; compounds the version does not know drop out. */
     private record Row(int[] items, double[] strengths) {
-        static Row of(InteractionProfile profile, LiveModel model) {
+        /** Strengths read at {@code atEpochMs}, the triggering event's time, under the version's half-life. */
+        static Row of(InteractionProfile profile, LiveModel model, long atEpochMs) {
             int[] items = new int[profile.size()];
             double[] strengths = new double[profile.size()];
+            var halfLife = model.settings().weights().halfLife();
+            double halfLifeMs = halfLife == null ? 0 : halfLife.toMillis();
             int n = 0;
             for (InteractionProfile.Entry e : profile.entries()) {
                 int i = model.indexOf(e.compoundId());
-                if (i >= 0 && e.strength() > 0) {
+                double strength = InteractionProfile.strengthAt(e, atEpochMs, halfLifeMs);
+                if (i >= 0 && strength > 0) {
                     items[n] = i;
-                    strengths[n++] = e.strength();
+                    strengths[n++] = strength;
                 }
             }
             return new Row(java.util.Arrays.copyOf(items, n), java.util.Arrays.copyOf(strengths, n));

@@ -55,11 +55,45 @@ public final class InteractionProfile {
         this.vectorVersion = version;
     }
 
-    /** Adds one event with weight {@code weight}; modifies this profile. */
+    /** Adds one event with weight {@code weight}, no decay; modifies this profile. */
     public void add(String compoundId, float weight, long occurredEpochMs, boolean used) {
-        entries.merge(compoundId, new Entry(compoundId, weight, 1, occurredEpochMs, used),
-                (old, now) -> new Entry(compoundId, old.strength() + weight, old.events() + 1,
-                        Math.max(old.lastSeenEpochMs(), occurredEpochMs), old.used() || used));
+        add(compoundId, weight, occurredEpochMs, used, 0);
+    }
+
+    /**
+     * Adds one event with weight {@code weight}; modifies this profile. With a half-life h > 0 an
+     * entry's strength is the decayed sum Σ w_e · 2^(−(t − t_e)/h) as of its last-seen time t
+     * ({@link org.congener.core.interactions.InteractionWeights}' decay kept in one number per
+     * compound: adding an event rescales the stored sum to the newer of the two times);
+     * {@link #strengthAt} reads it at any later time. h ≤ 0: plain sums.
+     */
+    public void add(String compoundId, float weight, long occurredEpochMs, boolean used, double halfLifeMs) {
+        entries.merge(compoundId, new Entry(compoundId, weight, 1, occurredEpochMs, used), (old, now) -> {
+            double sum;
+            long asOf = Math.max(old.lastSeenEpochMs(), occurredEpochMs);
+            if (halfLifeMs > 0) {
+                sum = old.strength() * decay(asOf - old.lastSeenEpochMs(), halfLifeMs)
+                        + weight * decay(asOf - occurredEpochMs, halfLifeMs);
+            } else {
+                sum = old.strength() + weight;
+            }
+            return new Entry(compoundId, (float) sum, old.events() + 1, asOf, old.used() || used);
+        });
+    }
+
+    /**
+     * The entry's strength at {@code atEpochMs} under half-life {@code halfLifeMs} (≤ 0: none). A time
+     * before the last-seen time reads the stored value: an age is never negative, as in the batch weights.
+     */
+    public static double strengthAt(Entry entry, long atEpochMs, double halfLifeMs) {
+        if (!(halfLifeMs > 0)) {
+            return entry.strength();
+        }
+        return entry.strength() * decay(Math.max(0, atEpochMs - entry.lastSeenEpochMs()), halfLifeMs);
+    }
+
+    private static double decay(long ageMs, double halfLifeMs) {
+        return Math.pow(2.0, -ageMs / halfLifeMs);
     }
 
     public Entry get(String compoundId) {
