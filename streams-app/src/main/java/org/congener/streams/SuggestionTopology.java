@@ -26,7 +26,11 @@ import org.congener.streams.scoring.ColdStartScorer;
 import org.congener.core.interactions.InteractionWeights;
 import org.congener.streams.model.ModelAssembler;
 import org.congener.streams.model.SharedTerms;
-import org.congener.streams.processor.ModelRecordProcessor;
+import org.congener.streams.processor.GlobalRecordProcessor;
+import org.congener.streams.processor.InMemoryTable;
+import org.congener.schemas.CatalogEntry;
+import org.congener.schemas.InventoryEvent;
+import org.congener.schemas.Researcher;
 import org.congener.streams.scoring.HybridScorer;
 import org.congener.schemas.ItemFactors;
 import org.congener.schemas.ItemNeighbours;
@@ -43,7 +47,7 @@ import org.congener.streams.state.InteractionProfileSerde;
  * usage-events (raw bytes, keyed by researcher) ─▶ intake ─┬─ rejected ─▶ dead-letters
  *                                                          └─ accepted ─▶ suggest ─▶ suggestions
  *     suggest's stores: researcher-interactions, latest-suggestions, group-popularity (cold start only)
- * catalog, researchers, inventory-events ─▶ global tables read by intake and suggest
+ * catalog, researchers, inventory-events ─▶ global stores ─▶ in-memory tables read by intake and suggest
  * model-item-factors, item-neighbours, model-manifests ─▶ global stores ─▶ model assembler ─▶ live snapshot
  * </pre>
  *
@@ -113,13 +117,16 @@ public final class SuggestionTopology {
                                        SharedTerms sharedTerms) {
         Topics topics = new Topics(settings.topicPrefix());
         ModelAssembler models = new ModelAssembler();
-        modelStore(builder, topics.modelItemFactors(), ITEM_FACTORS_STORE, models::onFactors);
-        modelStore(builder, topics.itemNeighbours(), NEIGHBOURS_STORE, models::onNeighbours);
-        modelStore(builder, topics.modelManifests(), MANIFESTS_STORE, models::onManifest);
-        globalTable(builder, topics.catalog(), CATALOG_STORE);
-        globalTable(builder, topics.researchers(), RESEARCHERS_STORE);
+        globalStore(builder, topics.modelItemFactors(), ITEM_FACTORS_STORE, models::onFactors);
+        globalStore(builder, topics.itemNeighbours(), NEIGHBOURS_STORE, models::onNeighbours);
+        globalStore(builder, topics.modelManifests(), MANIFESTS_STORE, models::onManifest);
+        InMemoryTable<CatalogEntry> catalog = new InMemoryTable<>();
+        InMemoryTable<Researcher> researchers = new InMemoryTable<>();
+        InMemoryTable<InventoryEvent> stock = new InMemoryTable<>();
+        globalStore(builder, topics.catalog(), CATALOG_STORE, catalog);
+        globalStore(builder, topics.researchers(), RESEARCHERS_STORE, researchers);
         // the latest stock event per compound; "in stock" means its quantity on hand is above zero
-        globalTable(builder, topics.inventoryEvents(), STOCK_STORE);
+        globalStore(builder, topics.inventoryEvents(), STOCK_STORE, stock);
 
         // caching: a heavy user's several events within one commit interval cost one changelog record
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(INTERACTIONS_STORE),
@@ -132,7 +139,7 @@ public final class SuggestionTopology {
         Topic<UsageEvent> usage = topics.usageEvents();
         KStream<String, Intake> intake = builder
                 .stream(usage.name(), Consumed.with(usage.keySerde(), Serdes.ByteArray()))
-                .process(() -> new UsageEventIntake(usage.valueSerde(), RESEARCHERS_STORE, CATALOG_STORE));
+                .process(() -> new UsageEventIntake(usage.valueSerde(), researchers, catalog));
 
         Topic<DeadLetter> deadLetters = topics.deadLetters();
         intake.filter((key, value) -> !value.isAccepted())
@@ -140,7 +147,7 @@ public final class SuggestionTopology {
                 .to(deadLetters.name(), Produced.with(deadLetters.keySerde(), deadLetters.valueSerde()));
 
         SuggestionProcessor.Stores stores = new SuggestionProcessor.Stores(INTERACTIONS_STORE, GROUP_POPULARITY_STORE,
-                LATEST_SUGGESTIONS_STORE, RESEARCHERS_STORE, CATALOG_STORE, STOCK_STORE);
+                LATEST_SUGGESTIONS_STORE, researchers, catalog, stock);
         double halfLifeMs = settings.popularityHalfLife().toMillis();
         Topic<Suggestions> suggestions = topics.suggestions();
         // the lists are this app's own output, built from checked values: written without a schema check
@@ -155,27 +162,19 @@ public final class SuggestionTopology {
     }
 
     /**
-     * A global store over one model topic whose processor also hands every record to the assembler;
-     * on start the processor replays the restored store into it (restoration bypasses processors).
+     * A global store over one compacted topic, validated when read from the topic and stored as the
+     * topic's JSON, whose processor also hands every record to {@code sink} (the model assembler or an
+     * in-memory table); on start the processor replays the restored store into it (restoration
+     * bypasses processors).
      */
     @SuppressWarnings("unchecked")
-    private static <V> void modelStore(StreamsBuilder builder, Topic<V> topic, String storeName,
-                                       java.util.function.BiConsumer<String, V> sink) {
+    private static <V> void globalStore(StreamsBuilder builder, Topic<V> topic, String storeName,
+                                        java.util.function.BiConsumer<String, V> sink) {
         Class<V> type = (Class<V>) topic.id().valueType();
         builder.addGlobalStore(
                 Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(storeName), topic.keySerde(),
                         RecordSerdes.storeValue(topic.id(), type)).withLoggingDisabled(),
                 topic.name(), Consumed.with(topic.keySerde(), topic.valueSerde()),
-                () -> new ModelRecordProcessor<>(storeName, sink));
-    }
-
-    /** A global table over a compacted topic: validated when read from the topic, stored as the topic's JSON. */
-    @SuppressWarnings("unchecked")
-    private static <V> void globalTable(StreamsBuilder builder, Topic<V> topic, String storeName) {
-        Class<V> type = (Class<V>) topic.id().valueType();
-        builder.globalTable(topic.name(), Consumed.with(topic.keySerde(), topic.valueSerde()),
-                Materialized.<String, V, KeyValueStore<Bytes, byte[]>>as(storeName)
-                        .withKeySerde(topic.keySerde())
-                        .withValueSerde(RecordSerdes.storeValue(topic.id(), type)));
+                () -> new GlobalRecordProcessor<>(storeName, sink));
     }
 }

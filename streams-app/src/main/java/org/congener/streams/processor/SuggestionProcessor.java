@@ -49,8 +49,10 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
     private static final Logger LOG = LoggerFactory.getLogger(SuggestionProcessor.class);
 
     /** Store and table names the processor reads. */
+    /** Store names of the task's own stores and the instance's in-memory global tables. */
     public record Stores(String interactions, String groupPopularity, String latestSuggestions,
-                         String researchers, String catalog, String stock) {
+                         InMemoryTable<Researcher> researchers, InMemoryTable<CatalogEntry> catalog,
+                         InMemoryTable<InventoryEvent> stock) {
     }
 
     private final Stores stores;
@@ -70,9 +72,9 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
     private KeyValueStore<String, InteractionProfile> interactions;
     private KeyValueStore<String, GroupPopularity> groups;
     private KeyValueStore<String, byte[]> latest;
-    private GlobalLookup<Researcher> researchers;
-    private GlobalLookup<CatalogEntry> catalog;
-    private GlobalLookup<InventoryEvent> stock;
+    private InMemoryTable<Researcher> researchers;
+    private InMemoryTable<CatalogEntry> catalog;
+    private InMemoryTable<InventoryEvent> stock;
 
     /**
      * @param liveModel        the live model snapshot of this instance, null before any version is live
@@ -101,9 +103,9 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         this.interactions = context.getStateStore(stores.interactions());
         this.groups = context.getStateStore(stores.groupPopularity());
         this.latest = context.getStateStore(stores.latestSuggestions());
-        this.researchers = GlobalLookup.of(context, stores.researchers());
-        this.catalog = GlobalLookup.of(context, stores.catalog());
-        this.stock = GlobalLookup.of(context, stores.stock());
+        this.researchers = stores.researchers();
+        this.catalog = stores.catalog();
+        this.stock = stores.stock();
     }
 
     @Override
@@ -186,7 +188,7 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
 
     /** Compound id → ontology term ids of every catalogue entry, for the cold-start neighbour lists. */
     private java.util.Map<String, List<String>> catalogueTerms() {
-        java.util.Map<String, List<String>> terms = new java.util.LinkedHashMap<>();
+        java.util.Map<String, List<String>> terms = new java.util.TreeMap<>();
         catalog.forEach((id, entry) -> terms.put(id, entry.termIds()));
         return terms;
     }

@@ -31,24 +31,21 @@ public final class UsageEventIntake implements Processor<String, byte[], String,
     private static final Logger LOG = LoggerFactory.getLogger(UsageEventIntake.class);
 
     private final Serde<UsageEvent> serde;
-    private final String researchersStore;
-    private final String catalogStore;
+    private final InMemoryTable<Researcher> researchers;
+    private final InMemoryTable<CatalogEntry> catalog;
     private ProcessorContext<String, Intake> context;
-    private GlobalLookup<Researcher> researchers;
-    private GlobalLookup<CatalogEntry> catalog;
     private DeadLetterMetric deadLetters;
 
-    public UsageEventIntake(Serde<UsageEvent> serde, String researchersStore, String catalogStore) {
+    public UsageEventIntake(Serde<UsageEvent> serde, InMemoryTable<Researcher> researchers,
+                            InMemoryTable<CatalogEntry> catalog) {
         this.serde = serde;
-        this.researchersStore = researchersStore;
-        this.catalogStore = catalogStore;
+        this.researchers = researchers;
+        this.catalog = catalog;
     }
 
     @Override
     public void init(ProcessorContext<String, Intake> context) {
         this.context = context;
-        this.researchers = GlobalLookup.of(context, researchersStore);
-        this.catalog = GlobalLookup.of(context, catalogStore);
         this.deadLetters = DeadLetterMetric.register(context);
     }
 

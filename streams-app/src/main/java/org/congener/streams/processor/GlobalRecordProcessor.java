@@ -10,16 +10,18 @@ import org.apache.kafka.streams.state.KeyValueIterator;
 import org.apache.kafka.streams.state.KeyValueStore;
 
 /**
- * Keeps one model topic in its global store and hands each record (tombstones too) to the model
- * assembler. Every instance runs one, so every instance assembles the same versions.
+ * Keeps one compacted topic in its global store and hands each record (tombstones too) to an
+ * in-memory consumer: the model assembler for the model topics, an {@link InMemoryTable} for the
+ * catalogue, researchers and stock. Every instance runs one per topic, so every instance holds the
+ * same versions and tables.
  */
-public final class ModelRecordProcessor<V> implements Processor<String, V, Void, Void> {
+public final class GlobalRecordProcessor<V> implements Processor<String, V, Void, Void> {
 
     private final String storeName;
     private final BiConsumer<String, V> sink;
     private KeyValueStore<String, V> store;
 
-    public ModelRecordProcessor(String storeName, BiConsumer<String, V> sink) {
+    public GlobalRecordProcessor(String storeName, BiConsumer<String, V> sink) {
         this.storeName = storeName;
         this.sink = sink;
     }
