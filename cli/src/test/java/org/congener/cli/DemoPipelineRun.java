@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.Collection;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.CompletableFuture;
@@ -46,14 +47,13 @@ import org.congener.trainer.service.TrainingOutcome;
 final class DemoPipelineRun {
 
     /** What the run left behind for the checks. */
-    record Result(String prefix, ReplayScenario scenario, AppConfig config, List<TrainingOutcome> outcomes,
+    record Result(ReplayScenario scenario, AppConfig config, List<TrainingOutcome> outcomes,
                   OutputCounter.Counts counts, EventReplay.Sent sent, Duration took) {
     }
 
     private static final Duration STARTUP = Duration.ofMinutes(2);
     private static final Duration PROCESSING = Duration.ofMinutes(5);
     private static final Duration TRAINER_STOP = Duration.ofMinutes(2);
-    private static final PrintStream SILENT = new PrintStream(OutputStream.nullOutputStream());
 
     private DemoPipelineRun() {
     }
@@ -97,24 +97,27 @@ final class DemoPipelineRun {
                 Map<String, Long> ackedAt = new ConcurrentHashMap<>();
                 try (OutputCounter counter = new OutputCounter(bootstrap, prefix)) {
                     CompletableFuture<OutputCounter.Counts> counting = CompletableFuture.supplyAsync(() ->
-                            counter.awaitTotal(expected, PROCESSING, new ProgressLine(SILENT, "processed", expected)));
+                            counter.awaitTotal(expected, PROCESSING, quiet()));
                     try {
                         ReplayScenario history = scenario.history(scenario.historySize());
                         ReplayScenario rest = scenario.after(scenario.historySize());
-                        replay.replayEvents(history, new ProgressLine(SILENT, "history", 1), 0, ackedAt);
+                        replay.replayEvents(history, quiet(), 0, ackedAt);
                         trainer.trainOnce("before the replay, on " + history.usageEvents().size() + " history events");
                         trainer.startSchedule(Math.max(1, rest.usageEvents().size() / 3));
-                        replay.replayEvents(rest, new ProgressLine(SILENT, "rest", 1), 0, ackedAt);
+                        replay.replayEvents(rest, quiet(), 0, ackedAt);
                         counts = counting.get(PROCESSING.toSeconds() + 30, TimeUnit.SECONDS);
-                    } finally {
+                    } catch (Exception e) {
                         counting.cancel(true);
-                        outcomes = trainer.stop(2, TRAINER_STOP);
+                        trainer.stop(0, Duration.ofSeconds(30));
+                        throw e;
                     }
+                    // as the demo does: the second run starts once a third of the rest is in
+                    outcomes = trainer.stop(2, TRAINER_STOP);
                 }
             }
             EventReplay.Sent sent = new EventReplay.Sent(scenario.usageEvents().size(),
                     scenario.inventoryEvents().size(), scenario.badUsageLines().size());
-            return new Result(prefix, scenario, config, outcomes, counts, sent,
+            return new Result(scenario, config, outcomes, counts, sent,
                     Duration.ofNanos(System.nanoTime() - started));
         }
     }
@@ -125,7 +128,7 @@ final class DemoPipelineRun {
      * may lie partly in the future of the machine that runs it).
      */
     private static void keepTheDemoYear(Admin admin, Collection<String> topics) throws Exception {
-        Map<ConfigResource, Collection<AlterConfigOp>> changes = new java.util.HashMap<>();
+        Map<ConfigResource, Collection<AlterConfigOp>> changes = new HashMap<>();
         List<ConfigResource> resources = new ArrayList<>();
         for (String topic : topics) {
             ConfigResource resource = new ConfigResource(ConfigResource.Type.TOPIC, topic);
@@ -144,6 +147,10 @@ final class DemoPipelineRun {
             }
             Thread.sleep(50);
         }
+    }
+
+    private static ProgressLine quiet() {
+        return new ProgressLine(new PrintStream(OutputStream.nullOutputStream()), "", 1);
     }
 
     private static boolean applied(Map<ConfigResource, Config> configs) {

@@ -146,16 +146,19 @@ final class PublishedVersion {
      * @param eligible whether a compound may be offered (catalogue, authorisations, earlier use)
      */
     Batch topN(List<UsageEvent> events, Predicate<String> eligible, int n) {
-        Map<String, Double> strengths = new LinkedHashMap<>();
+        // r_ui at the precision the streams app keeps it (a float sum, docs/runtime.md "State"): a double
+        // sum differs by about 1e-7, enough to swap two near-equal CF ranks under rank fusion
+        Map<String, Float> strengths = new LinkedHashMap<>();
         for (UsageEvent e : events) {
             Instant at = Instant.parse(e.occurredAt());
             // each event counts as of its own time, as the stream adds it
-            strengths.merge(e.compoundId(), settings.weights().contribution(e.kind(), e.quantity(), at, at), Double::sum);
+            float contribution = (float) settings.weights().contribution(e.kind(), e.quantity(), at, at);
+            strengths.merge(e.compoundId(), contribution, Float::sum);
         }
         int[] items = new int[strengths.size()];
         double[] values = new double[strengths.size()];
         int size = 0;
-        for (Map.Entry<String, Double> s : strengths.entrySet()) {
+        for (Map.Entry<String, Float> s : strengths.entrySet()) {
             Integer i = index.get(s.getKey());
             if (i != null && s.getValue() > 0) {
                 items[size] = i;
