@@ -58,7 +58,7 @@ final class UsageEventReader {
         for (String name = parser.nextFieldName(); name != null; name = parser.nextFieldName()) {
             JsonToken token = parser.nextToken();
             switch (name) {
-                case "schema" -> schema = SchemaIds.USAGE_EVENT.equals(string(parser, token)) ? SchemaIds.USAGE_EVENT : null;
+                case "schema" -> schema = schemaId(parser, token);
                 case "eventId" -> eventId = id(parser, token);
                 case "researcherId" -> researcherId = id(parser, token);
                 case "compoundId" -> compoundId = id(parser, token);
@@ -87,6 +87,10 @@ final class UsageEventReader {
         // decodes every string and number inside, so a broken one fails here exactly as in the tree
         VALUE_AS_TREE.readTree(parser);
         return null;
+    }
+
+    private static String schemaId(JsonParser parser, JsonToken token) throws IOException {
+        return SchemaIds.USAGE_EVENT.equals(string(parser, token)) ? SchemaIds.USAGE_EVENT : null;
     }
 
     private static String id(JsonParser parser, JsonToken token) throws IOException {

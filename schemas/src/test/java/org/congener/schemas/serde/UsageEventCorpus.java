@@ -1,11 +1,11 @@
 package org.congener.schemas.serde;
 
+import java.math.BigDecimal;
 import java.nio.charset.Charset;
 import java.nio.charset.StandardCharsets;
 import java.time.Month;
 import java.time.Year;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.Random;
 import java.util.function.BiFunction;
@@ -31,14 +31,12 @@ final class UsageEventCorpus {
 
     static final List<String> FIELDS = List.of("schema", "eventId", "researcherId", "compoundId", "kind", "quantity",
             "unit", "occurredAt");
-    /** Stands for bytes that are no UTF-8 at all; replaced after encoding. */
-    private static final char BROKEN = '\uE000';
-    private static final byte[] BROKEN_UTF8 = "\uE000".getBytes(StandardCharsets.UTF_8);
     private static final String ID_CHARS = "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789._:@-";
-    private static final String MAX_DOUBLE_AS_INTEGER = new java.math.BigDecimal(Double.MAX_VALUE).toBigInteger().toString();
-    private static final String ROUNDS_TO_INFINITY = new java.math.BigDecimal(Double.MAX_VALUE)
-            .add(new java.math.BigDecimal(Math.ulp(Double.MAX_VALUE)).divide(java.math.BigDecimal.valueOf(2)))
-            .toBigInteger().toString();
+    private static final BigDecimal MAX_DOUBLE = new BigDecimal(Double.MAX_VALUE);
+    private static final String MAX_DOUBLE_AS_INTEGER = MAX_DOUBLE.toBigInteger().toString();
+    /** Half an ulp above the largest double: the first integer a double cannot hold short of infinity. */
+    private static final String ROUNDS_TO_INFINITY = MAX_DOUBLE
+            .add(new BigDecimal(Math.ulp(Double.MAX_VALUE)).divide(BigDecimal.valueOf(2))).toBigInteger().toString();
 
     private final Random random;
 
@@ -56,7 +54,7 @@ final class UsageEventCorpus {
     }
 
     private Payload next(int index) {
-        Event event = validEvent();
+        PayloadDraft event = validEvent();
         StringBuilder how = new StringBuilder("#" + index);
         int roll = random.nextInt(10);
         int mistakes = roll < 2 ? 0 : roll < 8 ? 1 : 2;
@@ -69,8 +67,8 @@ final class UsageEventCorpus {
 
     // ---- valid values ----
 
-    private Event validEvent() {
-        Event event = new Event();
+    private PayloadDraft validEvent() {
+        PayloadDraft event = new PayloadDraft();
         // JSON may escape the slashes; the value is the same
         event.put("schema", random.nextInt(8) == 0 ? "\"congener\\/usage-event\\/v1\"" : string(SchemaIds.USAGE_EVENT));
         for (String idField : List.of("eventId", "researcherId", "compoundId")) {
@@ -130,34 +128,34 @@ final class UsageEventCorpus {
 
     // ---- mistakes and harmless changes; each returns what it did ----
 
-    private static final List<BiFunction<UsageEventCorpus, Event, String>> MUTATIONS = List.of(
+    private static final List<BiFunction<UsageEventCorpus, PayloadDraft, String>> MUTATIONS = List.of(
             UsageEventCorpus::dropField, UsageEventCorpus::extraField, UsageEventCorpus::wrongType,
             UsageEventCorpus::oddId, UsageEventCorpus::oddQuantity, UsageEventCorpus::oddInstant,
-            UsageEventCorpus::oddInstant, UsageEventCorpus::oddInstant, UsageEventCorpus::repeatedName, UsageEventCorpus::oddUnit,
-            UsageEventCorpus::oddKind, UsageEventCorpus::oddSchema, UsageEventCorpus::layout,
+            UsageEventCorpus::oddInstant, UsageEventCorpus::oddInstant, UsageEventCorpus::repeatedName,
+            UsageEventCorpus::oddUnit, UsageEventCorpus::oddKind, UsageEventCorpus::oddSchema, UsageEventCorpus::layout,
             UsageEventCorpus::trailing, UsageEventCorpus::notAnEvent, UsageEventCorpus::truncated,
             UsageEventCorpus::encoding, UsageEventCorpus::brokenBytes, UsageEventCorpus::deepValue);
 
-    private String dropField(Event event) {
+    private String dropField(PayloadDraft event) {
         String field = pick(FIELDS);
         event.remove(field);
         return "drop:" + field;
     }
 
-    private String extraField(Event event) {
+    private String extraField(PayloadDraft event) {
         String name = pick("price", "Schema", "eventid", "", "schema ", "quantity2", "é", "occurred_at", "$ref");
         event.put(name, pick("12.5", "null", "\"x\"", "{}", "[1,2]", "true"));
         return "extra:" + name;
     }
 
-    private String wrongType(Event event) {
+    private String wrongType(PayloadDraft event) {
         String field = pick(FIELDS);
         event.put(field, pick("null", "true", "false", "0", "-1", "1.5", "\"text\"", "\"\"", "[]", "{}",
                 "[1,\"a\",{\"b\":null}]", "{\"a\":{\"b\":[]}}", "\"25\""));
         return "type:" + field;
     }
 
-    private String oddId(Event event) {
+    private String oddId(PayloadDraft event) {
         String field = pick("eventId", "researcherId", "compoundId");
         String value = pick("", "a".repeat(129), "a".repeat(128), "-a", ".a", "_a", "@a", ":a", "a b", "a\n",
                 "a\r\n", "a\u2028", "é", "a/b", "a#", "a\u0000", "ａ", "a\uD83D\uDE00", "A:b@c.d_e-f", "0", "a\t",
@@ -166,7 +164,7 @@ final class UsageEventCorpus {
         return "id:" + field;
     }
 
-    private String oddQuantity(Event event) {
+    private String oddQuantity(PayloadDraft event) {
         String value = pick("-1", "-0", "-0.0", "0", "0.0", "-1e-400", "1e400", "-1e400", "1E+2", "1e-2",
                 "1.7976931348623157e308", "1.7976931348623159e308", "4.9e-324", "-4.9e-324", MAX_DOUBLE_AS_INTEGER,
                 ROUNDS_TO_INFINITY, "-" + MAX_DOUBLE_AS_INTEGER, "1" + "0".repeat(400), "-1" + "0".repeat(400),
@@ -177,7 +175,7 @@ final class UsageEventCorpus {
         return "quantity:" + value.substring(0, Math.min(24, value.length()));
     }
 
-    private String oddInstant(Event event) {
+    private String oddInstant(PayloadDraft event) {
         String value = switch (random.nextInt(3)) {
             case 0 -> misspelt(validInstant());
             case 1 -> nearlyValidInstant();
@@ -215,7 +213,7 @@ final class UsageEventCorpus {
         return String.format("%04d-%02d-%02dT%s%s%s", year, month, day, time, fraction, offset);
     }
 
-    private String repeatedName(Event event) {
+    private String repeatedName(PayloadDraft event) {
         String field = pick(FIELDS);
         String value = pick("\"BUY\"", "\"ORDER\"", "\"VIEW\"", "1", "-1", "null", "{}", "[[1]]",
                 "\"congener/usage-event/v1\"", "\"2026-03-14T09:26:53Z\"", "\"2026-02-30T09:26:53Z\"", "\"g\"",
@@ -225,26 +223,26 @@ final class UsageEventCorpus {
         return "repeat:" + field + (before ? "-before" : "-after");
     }
 
-    private String oddUnit(Event event) {
+    private String oddUnit(PayloadDraft event) {
         event.put("unit", string(pick("µL", "μL", "Μ", "µ", "g/µL", "ℓ", "g²", "m³", "uL", "1g", "g ", "",
                 "a".repeat(17), "a".repeat(16), "/g", ".g", "g\n", "G", "µ".repeat(16), "µ".repeat(17), "g-1")));
         return "unit";
     }
 
-    private String oddKind(Event event) {
+    private String oddKind(PayloadDraft event) {
         event.put("kind", string(pick("order", "BUY", "ORDER ", " ORDER", "", "USAGE-LOG", "Order", "VIEW\u0000",
                 "ORDER", "USAGE_LOG"), true));
         return "kind";
     }
 
-    private String oddSchema(Event event) {
+    private String oddSchema(PayloadDraft event) {
         event.put("schema", string(pick("congener/usage-event/v2", "congener/usage-event/v1 ",
                 "Congener/usage-event/v1", "congener/usage-event/", "congener/inventory-event/v1",
                 "congener/usage-event/v1"), true));
         return "schema";
     }
 
-    private String layout(Event event) {
+    private String layout(PayloadDraft event) {
         event.spacing = pick(" ", "\t", "\n", "\r\n", "  \n\t ");
         if (random.nextBoolean()) {
             event.shuffle(random);
@@ -252,34 +250,34 @@ final class UsageEventCorpus {
         return "layout";
     }
 
-    private String trailing(Event event) {
+    private String trailing(PayloadDraft event) {
         event.suffix = pick(" ", "\n", " x", "}", "{}", "null", "[", ",", "\u0000", "//c", "/* c */", "#", "\r\n\t");
         return "trailing";
     }
 
-    private String notAnEvent(Event event) {
+    private String notAnEvent(PayloadDraft event) {
         event.whole = pick("[]", "null", "1", "\"s\"", "true", "", " ", "{", "}", "{}", "{\"schema\"}", "[%s]",
                 "{\"event\":%s}", "%s%s", "\uFEFF%s", "\"%s\"");
         return "whole:" + event.whole;
     }
 
-    private String truncated(Event event) {
+    private String truncated(PayloadDraft event) {
         event.cut = random.nextDouble();
         return "cut";
     }
 
-    private String encoding(Event event) {
+    private String encoding(PayloadDraft event) {
         event.charset = pick(StandardCharsets.UTF_16BE, StandardCharsets.UTF_16LE, StandardCharsets.UTF_16,
                 Charset.forName("UTF-32BE"), StandardCharsets.ISO_8859_1);
         return "charset:" + event.charset;
     }
 
-    private String brokenBytes(Event event) {
+    private String brokenBytes(PayloadDraft event) {
         String field = pick(FIELDS);
         switch (random.nextInt(3)) {
-            case 0 -> event.put(field, "\"a" + BROKEN + "\"");
-            case 1 -> event.repeat(field, "[\"" + BROKEN + "\"]", true);
-            default -> event.put("x" + BROKEN, "1");
+            case 0 -> event.put(field, "\"a" + PayloadDraft.BROKEN + "\"");
+            case 1 -> event.repeat(field, "[\"" + PayloadDraft.BROKEN + "\"]", true);
+            default -> event.put("x" + PayloadDraft.BROKEN, "1");
         }
         event.brokenBytes = pick(new byte[] {(byte) 0xC3, 0x28}, new byte[] {(byte) 0xFF}, new byte[] {(byte) 0x80},
                 new byte[] {(byte) 0xE2, (byte) 0x82}, new byte[] {(byte) 0xC0, (byte) 0xAF},
@@ -287,7 +285,7 @@ final class UsageEventCorpus {
         return "broken:" + field;
     }
 
-    private String deepValue(Event event) {
+    private String deepValue(PayloadDraft event) {
         int depth = pick(10, 400, 999, 1000, 1001, 1500);
         String field = pick(FIELDS);
         event.repeat(field, "[".repeat(depth) + "]".repeat(depth), true);
@@ -331,83 +329,5 @@ final class UsageEventCorpus {
 
     private <V> V pick(List<V> values) {
         return values.get(random.nextInt(values.size()));
-    }
-
-    /** Fields as name and raw JSON value, in writing order, plus how the whole payload is laid out. */
-    private static final class Event {
-        final List<String[]> fields = new ArrayList<>();
-        String spacing = "";
-        String suffix = "";
-        String whole = "%s";
-        Charset charset = StandardCharsets.UTF_8;
-        byte[] brokenBytes;
-        double cut = 1.0;
-
-        void put(String name, String rawValue) {
-            for (String[] field : fields) {
-                if (field[0].equals(name)) {
-                    field[1] = rawValue;
-                    return;
-                }
-            }
-            fields.add(new String[] {name, rawValue});
-        }
-
-        void remove(String name) {
-            fields.removeIf(field -> field[0].equals(name));
-        }
-
-        void repeat(String name, String rawValue, boolean before) {
-            int at = 0;
-            while (at < fields.size() && !fields.get(at)[0].equals(name)) {
-                at++;
-            }
-            fields.add(before ? at : Math.min(at + 1, fields.size()), new String[] {name, rawValue});
-        }
-
-        void shuffle(Random random) {
-            java.util.Collections.shuffle(fields, random);
-        }
-
-        String render(Random random) {
-            StringBuilder out = new StringBuilder("{").append(spacing);
-            for (int i = 0; i < fields.size(); i++) {
-                if (i > 0) {
-                    out.append(spacing).append(',').append(spacing);
-                }
-                String name = fields.get(i)[0].replace("\\", "\\\\").replace("\"", "\\\"");
-                out.append('"').append(name).append('"').append(spacing).append(':').append(spacing)
-                        .append(fields.get(i)[1]);
-            }
-            String object = out.append(spacing).append('}').toString();
-            return whole.replace("%s", object) + suffix;
-        }
-
-        byte[] encode(String text) {
-            byte[] bytes = text.getBytes(charset);
-            if (brokenBytes != null && charset == StandardCharsets.UTF_8) {
-                bytes = replace(bytes, BROKEN_UTF8, brokenBytes);
-            }
-            return Arrays.copyOf(bytes, (int) Math.round(bytes.length * cut));
-        }
-
-        private static byte[] replace(byte[] bytes, byte[] what, byte[] with) {
-            List<Byte> out = new ArrayList<>();
-            for (int i = 0; i < bytes.length; i++) {
-                if (i + what.length <= bytes.length && Arrays.equals(bytes, i, i + what.length, what, 0, what.length)) {
-                    for (byte b : with) {
-                        out.add(b);
-                    }
-                    i += what.length - 1;
-                } else {
-                    out.add(bytes[i]);
-                }
-            }
-            byte[] result = new byte[out.size()];
-            for (int i = 0; i < result.length; i++) {
-                result[i] = out.get(i);
-            }
-            return result;
-        }
     }
 }

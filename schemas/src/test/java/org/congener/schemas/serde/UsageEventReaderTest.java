@@ -34,7 +34,8 @@ class UsageEventReaderTest {
     private static final int CORPUS_SIZE = 4000;
     private static final String TOPIC = "lab1.usage-events";
 
-    private final ValidatingJsonSerde<UsageEvent> serde = ValidatingJsonSerde.of(TopicName.USAGE_EVENTS, UsageEvent.class);
+    private final ValidatingJsonSerde<UsageEvent> serde =
+            ValidatingJsonSerde.of(TopicName.USAGE_EVENTS, UsageEvent.class);
 
     /** What the tree path makes of a payload: the record, or the exception it throws. */
     private record Outcome(UsageEvent event, InvalidRecordException rejection) {
@@ -90,7 +91,7 @@ class UsageEventReaderTest {
             }
         }
         assertTrue(mismatches.isEmpty(), () -> mismatches.size() + " of " + CORPUS_SIZE + " payloads (seed " + SEED
-                + ") differ, first ones:\n" + String.join("\n", mismatches.subList(0, Math.min(20, mismatches.size()))));
+                + ") differ, first ones:\n" + String.join("\n", mismatches.stream().limit(20).toList()));
         int acceptedCount = accepted;
         assertTrue(accepted >= CORPUS_SIZE / 10 && CORPUS_SIZE - accepted >= CORPUS_SIZE / 10,
                 () -> acceptedCount + " of " + CORPUS_SIZE + " accepted: the corpus should hold plenty of both");
