@@ -67,6 +67,7 @@ final class UsageEventReader {
                 case "unit" -> unit = unit(parser, token);
                 case "occurredAt" -> occurredAt = instant(parser, token);
                 default -> {
+                    // no later field can make a name that the schema does not list allowed
                     return null;
                 }
             }
