@@ -7,6 +7,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.util.List;
 import java.util.Objects;
+import java.util.function.Function;
 import org.apache.kafka.common.errors.SerializationException;
 import org.apache.kafka.common.serialization.Deserializer;
 import org.apache.kafka.common.serialization.Serde;
@@ -22,6 +23,9 @@ import org.congener.schemas.validation.Violation;
  * topic's schema, then maps it to the record; any failure throws {@link InvalidRecordException} with
  * a one-line reason, never returns null. A null payload (a tombstone) reads as null.
  *
+ * <p>Usage events are first read by {@link UsageEventReader}, which accepts exactly what the schema
+ * accepts; only a value it turns down takes the tree path, so every reason stays the tree path's.
+ *
  * <p>{@link #of} writes without validating, for the hot paths; {@link #validatingWrites} also checks
  * each value before writing it, for low-volume producers whose mistakes would be costly (the trainer
  * publishing a model version).
@@ -33,6 +37,8 @@ public final class ValidatingJsonSerde<T> implements Serde<T> {
     private final Class<T> type;
     private final SchemaValidator validator;
     private final boolean validateWrites;
+    /** The record, or null to send the value down the tree path. */
+    private final Function<byte[], T> fastRead;
 
     private ValidatingJsonSerde(TopicName topic, Class<T> type, boolean validateWrites) {
         this.topic = Objects.requireNonNull(topic, "topic");
@@ -43,6 +49,9 @@ public final class ValidatingJsonSerde<T> implements Serde<T> {
         }
         this.validator = SchemaValidator.forTopic(topic);
         this.validateWrites = validateWrites;
+        this.fastRead = topic == TopicName.USAGE_EVENTS
+                ? data -> type.cast(UsageEventReader.read(data))
+                : data -> null;
     }
 
     public static <T> ValidatingJsonSerde<T> of(TopicName topic, Class<T> type) {
@@ -95,6 +104,12 @@ public final class ValidatingJsonSerde<T> implements Serde<T> {
         if (data == null) {
             return null;
         }
+        T fast = fastRead.apply(data);
+        return fast != null ? fast : readValidated(data);
+    }
+
+    /** The tree path alone: parse, validate, map; the one place that words a rejection. */
+    T readValidated(byte[] data) {
         JsonNode tree = parse(data);
         List<Violation> violations = validator.check(tree);
         if (!violations.isEmpty()) {
