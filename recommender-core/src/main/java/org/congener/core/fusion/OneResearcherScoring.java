@@ -56,13 +56,9 @@ public final class OneResearcherScoring {
 
     private static final DenseKernels KERNELS = DenseKernels.best();
 
-    /** x·y_i for every item i, with the vectorised dot product of the factorisation kernels. */
+    /** x·y_i for every item i: Y·x by the blocked matrix–vector product of the factorisation kernels. */
     public static void cfScores(double[] x, FactorMatrix itemFactors, double[] out) {
-        int k = itemFactors.rank();
-        double[] y = itemFactors.data();
-        for (int i = 0; i < out.length; i++) {
-            out[i] = KERNELS.dot(x, 0, y, itemFactors.offset(i), k);
-        }
+        KERNELS.multiply(itemFactors.data(), 0, out.length, itemFactors.rank(), x, 0, out, 0);
     }
 
     /**
