@@ -1,0 +1,119 @@
+package org.congener.core.fusion;
+
+/**
+ * Fuses one researcher's CF and semantic scores into a preallocated array (DESIGN.md, "Scoring"). CF
+ * scores can be negative, so both sides are first min–max normalised to [0, 1] over the researcher's
+ * candidates (items not in training):
+ * <ul>
+ *   <li>PRODUCT: cf̂ · (ε + sem)</li>
+ *   <li>BLEND: w · cf̂ + (1 − w) · sem̂</li>
+ *   <li>RANK_FUSION: 1/(k + rank_cf) + 1/(k + rank_sem), ranks from 1, ties by item index (Cormack,
+ *       Clarke &amp; Büttcher 2009, "Reciprocal rank fusion outperforms Condorcet and individual rank
+ *       learning methods", SIGIR)</li>
+ *   <li>CF_ONLY, SEMANTIC_ONLY: one side alone</li>
+ * </ul>
+ * Training items count as −∞ on both sides and get −∞, so they never enter a list. The inputs are
+ * read, never modified; normalised values are formed where they are used, so no copy of either side
+ * is made. One instance serves one thread: it keeps the rank order's arrays, made on first use.
+ */
+final class ScoreFusion {
+    private final int itemCount;
+    private RankOrder rankOrder;
+    private double lowest;
+    private double span;
+
+    ScoreFusion(int itemCount) {
+        this.itemCount = itemCount;
+    }
+
+    /**
+     * Writes the fused score of every item into {@code out}. {@code training[from..to)} lists the
+     * researcher's items in ascending order.
+     */
+    void fuse(FusionSettings settings, double[] cf, double[] semantic, int[] training, int from, int to, double[] out) {
+        if (cf.length != itemCount || semantic.length != itemCount || out.length != itemCount) {
+            throw new IllegalArgumentException("score arrays must have " + itemCount + " entries");
+        }
+        switch (settings.rule()) {
+            case CF_ONLY -> System.arraycopy(cf, 0, out, 0, itemCount);
+            case SEMANTIC_ONLY -> System.arraycopy(semantic, 0, out, 0, itemCount);
+            case PRODUCT -> product(settings.epsilon(), cf, semantic, training, from, to, out);
+            case BLEND -> blend(settings.weight(), cf, semantic, training, from, to, out);
+            case RANK_FUSION -> rankFusion(settings.rrfK(), cf, semantic, training, from, to, out);
+            default -> throw new IllegalStateException("unknown rule " + settings.rule());
+        }
+        for (int p = from; p < to; p++) {
+            out[training[p]] = Double.NEGATIVE_INFINITY;
+        }
+    }
+
+    private void product(double epsilon, double[] cf, double[] semantic, int[] training, int from, int to,
+                         double[] out) {
+        range(cf, training, from, to);
+        double lo = lowest;
+        double s = span;
+        for (int i = 0; i < itemCount; i++) {
+            out[i] = normalised(cf[i], lo, s) * (epsilon + semantic[i]);
+        }
+    }
+
+    private void blend(double w, double[] cf, double[] semantic, int[] training, int from, int to, double[] out) {
+        range(cf, training, from, to);
+        double cfLo = lowest;
+        double cfSpan = span;
+        range(semantic, training, from, to);
+        double semLo = lowest;
+        double semSpan = span;
+        for (int i = 0; i < itemCount; i++) {
+            out[i] = w * normalised(cf[i], cfLo, cfSpan) + (1 - w) * normalised(semantic[i], semLo, semSpan);
+        }
+    }
+
+    private void rankFusion(double k, double[] cf, double[] semantic, int[] training, int from, int to,
+                            double[] out) {
+        if (rankOrder == null) {
+            rankOrder = new RankOrder(itemCount);
+        }
+        int[] byCf = rankOrder.descending(cf, training, from, to);
+        for (int r = 0; r < itemCount; r++) {
+            out[byCf[r]] = 1.0 / (k + (r + 1));
+        }
+        int[] bySemantic = rankOrder.descending(semantic, training, from, to);
+        for (int r = 0; r < itemCount; r++) {
+            out[bySemantic[r]] += 1.0 / (k + (r + 1));
+        }
+    }
+
+    /**
+     * Lowest finite score and span (highest − lowest) over the candidates, i.e. skipping the sorted
+     * training items; into {@link #lowest} and {@link #span}.
+     */
+    private void range(double[] v, int[] training, int from, int to) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        int next = from;
+        for (int i = 0; i < itemCount; i++) {
+            if (next < to && training[next] == i) {
+                while (next < to && training[next] == i) {
+                    next++;
+                }
+                continue;
+            }
+            double x = v[i];
+            if (Double.isFinite(x)) {
+                lo = Math.min(lo, x);
+                hi = Math.max(hi, x);
+            }
+        }
+        lowest = lo;
+        span = hi - lo;
+    }
+
+    /** Min–max to [0, 1]; non-finite scores pass unchanged; all candidates equal → 1. */
+    private static double normalised(double x, double lo, double span) {
+        if (!Double.isFinite(x)) {
+            return x;
+        }
+        return span > 0 ? (x - lo) / span : 1.0;
+    }
+}
