@@ -51,9 +51,14 @@ final class RankOrder {
         java.util.Arrays.fill(counts, 0);
         for (int i = 0; i < n; i++) {
             long key = keys[i];
-            for (int d = 0; d < DIGITS; d++) {
-                counts[d * BUCKETS + (int) ((key >>> (8 * d)) & 0xFF)]++;
-            }
+            counts[(int) (key & 0xFF)]++;
+            counts[BUCKETS + (int) ((key >>> 8) & 0xFF)]++;
+            counts[2 * BUCKETS + (int) ((key >>> 16) & 0xFF)]++;
+            counts[3 * BUCKETS + (int) ((key >>> 24) & 0xFF)]++;
+            counts[4 * BUCKETS + (int) ((key >>> 32) & 0xFF)]++;
+            counts[5 * BUCKETS + (int) ((key >>> 40) & 0xFF)]++;
+            counts[6 * BUCKETS + (int) ((key >>> 48) & 0xFF)]++;
+            counts[7 * BUCKETS + (int) (key >>> 56)]++;
         }
         long[] srcKeys = keys;
         long[] dstKeys = keysSwap;

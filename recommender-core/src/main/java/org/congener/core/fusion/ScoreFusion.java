@@ -19,6 +19,9 @@ package org.congener.core.fusion;
 final class ScoreFusion {
     private final int itemCount;
     private RankOrder rankOrder;
+    /** 1/(k + r) for ranks r = 1..n at {@link #reciprocalK}: the same quotients, divided once per k. */
+    private double[] reciprocalRank;
+    private double reciprocalK = Double.NaN;
     private double lowest;
     private double span;
 
@@ -73,14 +76,21 @@ final class ScoreFusion {
                             double[] out) {
         if (rankOrder == null) {
             rankOrder = new RankOrder(itemCount);
+            reciprocalRank = new double[itemCount];
+        }
+        if (Double.compare(k, reciprocalK) != 0) {
+            for (int r = 0; r < itemCount; r++) {
+                reciprocalRank[r] = 1.0 / (k + (r + 1));
+            }
+            reciprocalK = k;
         }
         int[] byCf = rankOrder.descending(cf, training, from, to);
         for (int r = 0; r < itemCount; r++) {
-            out[byCf[r]] = 1.0 / (k + (r + 1));
+            out[byCf[r]] = reciprocalRank[r];
         }
         int[] bySemantic = rankOrder.descending(semantic, training, from, to);
         for (int r = 0; r < itemCount; r++) {
-            out[bySemantic[r]] += 1.0 / (k + (r + 1));
+            out[bySemantic[r]] += reciprocalRank[r];
         }
     }
 

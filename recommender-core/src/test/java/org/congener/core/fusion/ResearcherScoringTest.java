@@ -170,9 +170,11 @@ class ResearcherScoringTest {
         Model model = Model.random(257, 13, 8L);
         SplittableRandom random = new SplittableRandom(9);
         ScoringWorkspace reused = new ScoringWorkspace(257, 13);
-        // sizes past the workspace's first capacity of 16, back to none, and rules alternating on it
-        int[] sizes = {3, 40, 0, 17, 1, 90, 5, 0, 33};
-        FusionSettings[] rules = rules().toArray(FusionSettings[]::new);
+        // sizes past the workspace's first capacity of 16, back to none, and rules alternating on it,
+        // rank fusion with two different k
+        int[] sizes = {3, 40, 0, 17, 1, 90, 5, 0, 33, 12, 8, 21};
+        FusionSettings[] rules = Stream.concat(rules(), Stream.of(FusionSettings.rankFusion(7)))
+                .toArray(FusionSettings[]::new);
         for (int t = 0; t < sizes.length; t++) {
             FusionSettings fusion = rules[t % rules.length];
             ResearcherScoring scoring = model.scoring(fusion);
