@@ -44,8 +44,17 @@ class RankOrderTest {
     @Test
     void shouldPutAllEqualScoresInIndexOrderWhenEveryDigitPassIsSkipped() {
         RankOrder order = new RankOrder(6);
-        assertArrayEquals(new int[] {0, 1, 2, 3, 4, 5}, order.descending(new double[6], new int[0], 0, 0));
+        double[] half = {0.5, 0.5, 0.5, 0.5, 0.5, 0.5};
+        assertArrayEquals(new int[] {0, 1, 2, 3, 4, 5}, order.descending(half, new int[0], 0, 0));
         // item 2 masked: it alone falls behind the five equal scores
-        assertArrayEquals(new int[] {0, 1, 3, 4, 5, 2}, order.descending(new double[6], new int[] {2}, 0, 1));
+        assertArrayEquals(new int[] {0, 1, 3, 4, 5, 2}, order.descending(half, new int[] {2}, 0, 1));
+    }
+
+    @Test
+    void shouldOrderScoresAboveZeroThenZerosThenBelowWhenMostAreZero() {
+        RankOrder order = new RankOrder(8);
+        double[] v = {0, -0.5, 0.25, 0, -0.0, 0.75, 0, Double.NaN};
+        // NaN first as in Double.compare, then 0.75, 0.25, the zeros (−0.0 among them) by index, −0.5
+        assertArrayEquals(new int[] {7, 5, 2, 0, 3, 4, 6, 1}, order.descending(v, new int[0], 0, 0));
     }
 }
