@@ -24,6 +24,8 @@ final class ScoreFusion {
     private double reciprocalK = Double.NaN;
     private double lowest;
     private double span;
+    /** Whether the last {@link #range} saw only finite candidates with a positive span. */
+    private boolean plainScale;
 
     ScoreFusion(int itemCount) {
         this.itemCount = itemCount;
@@ -55,6 +57,13 @@ final class ScoreFusion {
         range(cf, training, from, to);
         double lo = lowest;
         double s = span;
+        if (plainScale) {
+            // the same quotients without the per-item tests, so the loop runs on vector lanes
+            for (int i = 0; i < itemCount; i++) {
+                out[i] = ((cf[i] - lo) / s) * (epsilon + semantic[i]);
+            }
+            return;
+        }
         for (int i = 0; i < itemCount; i++) {
             out[i] = normalised(cf[i], lo, s) * (epsilon + semantic[i]);
         }
@@ -64,9 +73,17 @@ final class ScoreFusion {
         range(cf, training, from, to);
         double cfLo = lowest;
         double cfSpan = span;
+        boolean cfPlain = plainScale;
         range(semantic, training, from, to);
         double semLo = lowest;
         double semSpan = span;
+        if (cfPlain && plainScale) {
+            // the same quotients without the per-item tests, so the loop runs on vector lanes
+            for (int i = 0; i < itemCount; i++) {
+                out[i] = w * ((cf[i] - cfLo) / cfSpan) + (1 - w) * ((semantic[i] - semLo) / semSpan);
+            }
+            return;
+        }
         for (int i = 0; i < itemCount; i++) {
             out[i] = w * normalised(cf[i], cfLo, cfSpan) + (1 - w) * normalised(semantic[i], semLo, semSpan);
         }
@@ -96,11 +113,12 @@ final class ScoreFusion {
 
     /**
      * Lowest finite score and span (highest − lowest) over the candidates, i.e. skipping the sorted
-     * training items; into {@link #lowest} and {@link #span}.
+     * training items; into {@link #lowest}, {@link #span} and {@link #plainScale}.
      */
     private void range(double[] v, int[] training, int from, int to) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
+        boolean allFinite = true;
         int next = from;
         for (int i = 0; i < itemCount; i++) {
             if (next < to && training[next] == i) {
@@ -113,10 +131,13 @@ final class ScoreFusion {
             if (Double.isFinite(x)) {
                 lo = Math.min(lo, x);
                 hi = Math.max(hi, x);
+            } else {
+                allFinite = false;
             }
         }
         lowest = lo;
         span = hi - lo;
+        plainScale = allFinite && span > 0;
     }
 
     /** Min–max to [0, 1]; non-finite scores pass unchanged; all candidates equal → 1. */

@@ -55,7 +55,7 @@ final class ScoringAsBefore {
     }
 
     /** FusedScorer.scoreAll: c and m are copies, masked and normalised in place. */
-    private static double[] fuse(FusionSettings settings, double[] c, double[] m, int[] training) {
+    static double[] fuse(FusionSettings settings, double[] c, double[] m, int[] training) {
         double[] out = new double[c.length];
         mask(c, training);
         mask(m, training);
