@@ -14,6 +14,15 @@ public interface DenseKernels {
     /** y[yOff+t] += alpha·x[xOff+t] for t &lt; n; modifies {@code y}. */
     void axpy(double alpha, double[] x, int xOff, double[] y, int yOff, int n);
 
+    /**
+     * out[outOff+r] = Σ_t a[aOff+r·n+t]·x[xOff+t] for r &lt; rows: the product of a row-major block of
+     * {@code rows} × {@code n} with a vector (the CF scores Y·x of every item in one call). Several rows
+     * are taken per pass so each load of x serves all of them. Each row is summed in the order that
+     * {@link #dot} uses, so out[r] equals {@code dot(a, aOff + r·n, x, xOff, n)} bit for bit. Modifies
+     * {@code out}.
+     */
+    void multiply(double[] a, int aOff, int rows, int n, double[] x, int xOff, double[] out, int outOff);
+
     /** The plain-loop implementation. */
     static DenseKernels scalar() {
         return ScalarKernels.INSTANCE;

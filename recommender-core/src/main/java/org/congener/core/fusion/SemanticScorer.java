@@ -26,22 +26,31 @@ public final class SemanticScorer implements ScoreFunction {
 
     @Override
     public void scoreAll(int user, double[] out) {
+        scoreInto(byUser.columnArray(), byUser.valueArray(), byUser.rowStart(user), byUser.rowEnd(user), neighbours,
+                aggregation, out);
+    }
+
+    /**
+     * The semantic score of every item for the researcher whose items and strengths are
+     * {@code items/strengths[from..to)}; overwrites {@code out} (one entry per item). The stream's
+     * workspace and the batch scorer share this, so the two cannot differ.
+     */
+    static void scoreInto(int[] items, double[] strengths, int from, int to, NeighbourLists neighbours,
+                          SemanticAggregation aggregation, double[] out) {
         Arrays.fill(out, 0.0);
-        int from = byUser.rowStart(user);
-        int to = byUser.rowEnd(user);
         if (from == to) {
             return;
         }
         double totalWeight = 0;
         for (int p = from; p < to; p++) {
-            int j = byUser.column(p);
-            double w = aggregation == SemanticAggregation.WEIGHTED ? byUser.value(p) : 1.0;
+            int j = items[p];
+            double w = aggregation == SemanticAggregation.WEIGHTED ? strengths[p] : 1.0;
             totalWeight += w;
-            spread(out, j, 1.0, w);
+            spread(aggregation, out, j, 1.0, w);
             int[] ids = neighbours.neighbours(j);
             double[] sims = neighbours.similarities(j);
             for (int t = 0; t < ids.length; t++) {
-                spread(out, ids[t], sims[t], w);
+                spread(aggregation, out, ids[t], sims[t], w);
             }
         }
         if (aggregation != SemanticAggregation.BEST_MATCH && totalWeight > 0) {
@@ -51,7 +60,8 @@ public final class SemanticScorer implements ScoreFunction {
         }
     }
 
-    private void spread(double[] out, int item, double similarity, double weight) {
+    private static void spread(SemanticAggregation aggregation, double[] out, int item, double similarity,
+                               double weight) {
         if (aggregation == SemanticAggregation.BEST_MATCH) {
             out[item] = Math.max(out[item], similarity);
         } else {
