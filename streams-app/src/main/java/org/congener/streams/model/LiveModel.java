@@ -13,6 +13,7 @@ import org.congener.core.factorisation.FixedFactors;
 import org.congener.core.factorisation.FoldIn;
 import org.congener.core.fusion.ManifestSettings;
 import org.congener.core.fusion.NeighbourLists;
+import org.congener.core.fusion.ResearcherScoring;
 import org.congener.schemas.ItemFactors;
 import org.congener.schemas.ItemNeighbours;
 import org.congener.schemas.ModelManifest;
@@ -33,6 +34,7 @@ public final class LiveModel {
     private final FactorMatrix itemFactors;
     private final NeighbourLists neighbours;
     private final FoldIn foldIn;
+    private final ResearcherScoring scoring;
 
     private LiveModel(ModelManifest manifest, ManifestSettings settings, String[] compoundIds,
                       Map<String, Integer> index, FactorMatrix itemFactors, NeighbourLists neighbours) {
@@ -48,6 +50,7 @@ public final class LiveModel {
             gram[i] = manifest.gram().get(i);
         }
         this.foldIn = new FoldIn(new FixedFactors(itemFactors, gram), als);
+        this.scoring = new ResearcherScoring(foldIn, itemFactors, neighbours, settings.fusion());
     }
 
     /**
@@ -150,5 +153,10 @@ public final class LiveModel {
 
     public FoldIn foldIn() {
         return foldIn;
+    }
+
+    /** Scoring of one researcher under this version, into a per-thread workspace. */
+    public ResearcherScoring scoring() {
+        return scoring;
     }
 }

@@ -4,17 +4,21 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.congener.core.fusion.NeighbourLists;
-import org.congener.core.fusion.OneResearcherScoring;
+import org.congener.core.fusion.ResearcherScoring;
+import org.congener.core.fusion.ScoringWorkspace;
 import org.congener.schemas.Contribution;
 import org.congener.schemas.SuggestionSource;
 import org.congener.streams.model.LiveModel;
 import org.congener.streams.state.InteractionProfile;
 
 /**
- * Under a live model version: the researcher's vector folded in exactly from their interaction
- * strengths, scored with the version's fusion rule ({@link OneResearcherScoring}, the same code a batch
- * top-N calls), filtered best-first. Before any version is live the fallback (group popularity) ranks,
- * and the list is flagged with the fallback's source and no version.
+ * Under a live model version: the researcher's vector folded in from their interaction strengths —
+ * exactly at their first event under the version, then by conjugate gradient run to convergence from
+ * the vector kept in their profile (the warm start of the design) — scored with the version's fusion
+ * rule through {@link ResearcherScoring} (the code the batch top-N of {@link
+ * org.congener.core.fusion.OneResearcherScoring} runs too) into this thread's reused workspace, and
+ * filtered best-first. Before any version is live the cold-start scorer ranks, and the list is
+ * flagged with its source and no version.
  */
 public final class HybridScorer implements SuggestionScorer {
 
@@ -22,6 +26,8 @@ public final class HybridScorer implements SuggestionScorer {
     static final int CONTRIBUTORS = 3;
 
     private final SuggestionScorer coldStart;
+    /** One workspace per stream thread (item-count doubles ×4), resized when a version of another size goes live. */
+    private final ThreadLocal<ScoringWorkspace> workspaces = new ThreadLocal<>();
 
     public HybridScorer(SuggestionScorer coldStart) {
         this.coldStart = coldStart;
@@ -49,17 +55,32 @@ public final class HybridScorer implements SuggestionScorer {
             return coldStart.rank(input, n);
         }
         Row row = Row.of(input.profile(), model, input.atEpochMs());
-        OneResearcherScoring.Scores scores = OneResearcherScoring.score(model.foldIn(), model.itemFactors(),
-                model.neighbours(), model.settings().fusion(), row.items, row.strengths);
-        input.profile().keepVector(model.version(), scores.vector());
-        int[] top = OneResearcherScoring.topN(scores.fused(), n,
-                i -> input.eligible().eligible(model.compoundId(i)));
+        ResearcherScoring scoring = model.scoring();
+        ScoringWorkspace ws = scoring.workspaceFor(workspaces.get());
+        workspaces.set(ws);
+        scoring.score(row.items, row.strengths, warmStart(input.profile().vectorUnder(model.version())), ws);
+        double[] x = new double[scoring.rank()];
+        ws.copyVector(x);
+        input.profile().keepVector(model.version(), x);
+        int[] top = ws.topN(n, i -> input.eligible().eligible(model.compoundId(i)));
         List<ScoredCandidate> ranked = new ArrayList<>(top.length);
         for (int i : top) {
-            ranked.add(new ScoredCandidate(model.compoundId(i), scores.cf()[i], scores.semantic()[i],
-                    scores.fused()[i], contributors(model, row, i)));
+            ranked.add(new ScoredCandidate(model.compoundId(i), ws.cf(i), ws.semantic(i), ws.fused(i),
+                    contributors(model, row, i)));
         }
         return ranked;
+    }
+
+    /** The kept vector widened for the solver, or null (no vector under this version: exact fold-in). */
+    private static double[] warmStart(float[] kept) {
+        if (kept == null) {
+            return null;
+        }
+        double[] x = new double[kept.length];
+        for (int f = 0; f < kept.length; f++) {
+            x[f] = kept[f];
+        }
+        return x;
     }
 
     /**
