@@ -18,16 +18,18 @@ import org.ejml.interfaces.linsol.LinearSolverDense;
  * start without forming the system (Takács, Pilászy &amp; Tikk 2011, "Applications of the conjugate
  * gradient method for implicit feedback collaborative filtering", RecSys, Algorithm 2). The trainer
  * takes a fixed few CG steps per half-step; the stream runs CG to convergence
- * ({@link #foldInConverged}), from the researcher's previous vector when it has one, since one new
- * interaction moves the solution little and CG's error shrinks from wherever it starts.
+ * ({@link #foldInConverged}) from the researcher's previous vector when it has one: CG's error shrinks
+ * from wherever it starts, so a start nearer the solution needs fewer steps (after one new interaction
+ * only a step or two fewer, BENCHMARKS.md "Per-event scoring").
  *
  * <p>Instances are thread-safe; each thread passes its own {@link Workspace}.
  */
 public final class FoldIn {
     /**
      * CG stops once ‖r‖ ≤ this · ‖YᵀC_u p(u)‖, r the residual of the fold-in system. The error then
-     * satisfies ‖x − x*‖/‖x*‖ ≤ κ(A)·‖r‖/‖b‖; fitted factors at k = 16–64 showed κ-factors up to about
-     * 12, so 1e-11 keeps x within about 1e-10 of the exact solution, for about two more steps than 1e-10.
+     * satisfies ‖x − x*‖/‖x*‖ ≤ κ(A)·‖r‖/‖b‖; on fitted factors at k = 16–64 the relative error stayed
+     * within about 12 times the tolerance, so 1e-11 keeps x within about 1e-10 of the exact solution
+     * ({@code ConvergedFoldInTest} asserts 1e-9), for about two more steps than 1e-10 would take.
      */
     public static final double CONVERGED_RELATIVE_RESIDUAL = 1e-11;
 
@@ -213,12 +215,11 @@ public final class FoldIn {
     }
 
     /**
-     * At most {@code maxSteps} CG steps on the system of eq. (4) from the start held in x, stopping
-     * once ‖r‖² ≤ {@code stopBelow}; returns the steps taken and leaves ‖r‖² in the workspace. With
-     * {@code requirePositiveCurvature} a direction with d·Ad ≤ 0 throws; the trainer's fixed steps keep
-     * their old arithmetic without the check.
+     * At most {@code maxSteps} CG steps on the system A x = b of eq. (4) from the start held in x,
+     * stopping once ‖r‖² ≤ {@code stopBelow}; returns the steps taken and leaves ‖r‖² in the workspace.
      * A·d = (YᵀY + λI)d + Σ_{i∈I_u} (c_ui − 1)(y_i·d) y_i, so each step costs k² + 2·n_u·k
-     * multiply-adds and the system is never formed.
+     * multiply-adds and the system is never formed. With {@code requirePositiveCurvature} a direction
+     * with d·Ad ≤ 0 throws; the trainer's fixed steps keep their old arithmetic without the check.
      */
     private int conjugateGradient(int[] cols, double[] vals, int from, int to, double[] x, int xOff, int maxSteps,
                                   double stopBelow, boolean requirePositiveCurvature, Workspace ws) {

@@ -76,7 +76,7 @@ public final class ScoringWorkspace {
         return fused[item];
     }
 
-    /** How many of the researcher's items were scored (distinct compounds of the model). */
+    /** How many items the last scored researcher had (n_u). */
     public int researcherItems() {
         return researcherItems;
     }
