@@ -27,6 +27,8 @@ public final class ResearcherScoring {
     private final FactorMatrix itemFactors;
     private final NeighbourLists neighbours;
     private final FusionSettings fusion;
+    /** Y as floats when every entry is one (published factors are), else null: see {@link #narrowed}. */
+    private final float[] narrowFactors;
 
     public ResearcherScoring(FoldIn foldIn, FactorMatrix itemFactors, NeighbourLists neighbours,
                              FusionSettings fusion) {
@@ -41,6 +43,28 @@ public final class ResearcherScoring {
         this.itemFactors = itemFactors;
         this.neighbours = neighbours;
         this.fusion = fusion;
+        this.narrowFactors = narrowed(itemFactors.data());
+    }
+
+    /**
+     * The factors as floats when that loses nothing (each entry is a float value), else null. The CF
+     * product then reads half the bytes and still gives the double product bit for bit
+     * ({@link DenseKernels#multiply(float[], int, int, int, double[], int, double[], int, double[])}).
+     */
+    static float[] narrowed(double[] data) {
+        float[] narrow = new float[data.length];
+        for (int t = 0; t < data.length; t++) {
+            narrow[t] = (float) data[t];
+            if (narrow[t] != data[t]) {
+                return null;
+            }
+        }
+        return narrow;
+    }
+
+    /** Whether the CF product reads the factors as floats. */
+    public boolean readsFloatFactors() {
+        return narrowFactors != null;
     }
 
     public int itemCount() {
@@ -88,7 +112,11 @@ public final class ResearcherScoring {
         }
         ws.sortItems(items, strengths);
         foldIn(items, strengths, warmStart, ws);
-        KERNELS.multiply(itemFactors.data(), 0, itemCount(), rank(), ws.vector, 0, ws.cf, 0);
+        if (narrowFactors != null) {
+            KERNELS.multiply(narrowFactors, 0, itemCount(), rank(), ws.vector, 0, ws.cf, 0, ws.widened);
+        } else {
+            KERNELS.multiply(itemFactors.data(), 0, itemCount(), rank(), ws.vector, 0, ws.cf, 0);
+        }
         SemanticScorer.scoreInto(ws.sortedItems, ws.sortedStrengths, 0, items.length, neighbours,
                 SemanticAggregation.MEAN, ws.semantic);
         ws.fusion.fuse(fusion, ws.cf, ws.semantic, ws.sortedItems, 0, items.length, ws.fused);

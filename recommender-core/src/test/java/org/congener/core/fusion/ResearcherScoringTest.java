@@ -29,8 +29,19 @@ class ResearcherScoringTest {
     /** Seeded random model: catalogue size and rank chosen off the multiples of 4 rows and 8 lanes. */
     private record Model(FactorMatrix y, FoldIn foldIn, NeighbourLists neighbours) {
         static Model random(int items, int rank, long seed) {
+            return random(items, rank, seed, false);
+        }
+
+        /** @param floats round every factor to a float, as published factors are */
+        static Model random(int items, int rank, long seed, boolean floats) {
             SplittableRandom random = new SplittableRandom(seed);
             FactorMatrix y = FactorMatrix.random(items, rank, seed);
+            if (floats) {
+                double[] data = y.data();
+                for (int t = 0; t < data.length; t++) {
+                    data[t] = (float) data[t];
+                }
+            }
             // compounds without factors (never interacted with in training): CF score 0 for everyone
             for (int t = 0; t < items / 10; t++) {
                 y.setRow(random.nextInt(items), new double[rank]);
@@ -126,26 +137,30 @@ class ResearcherScoringTest {
     void shouldEqualTheScoringAsItWasBitForBitWhenDataAreSeededRandom(FusionSettings fusion, int items, int rank) {
         // the same operations in the same order: x_u by the same Cholesky, each CF score summed as the row
         // dot product sums it, the same spread and divisions, the same normalisation and ranks
-        Model model = Model.random(items, rank, 21L + rank);
-        ResearcherScoring scoring = model.scoring(fusion);
-        ScoringWorkspace ws = scoring.newWorkspace();
-        SplittableRandom random = new SplittableRandom(4);
-        for (int size : new int[] {0, 1, 2, 7, 20, 33}) {
-            History h = History.random(random, items, size);
-            OneResearcherScoring.Scores before = ScoringAsBefore.score(model.foldIn(), model.y(), model.neighbours(),
-                    fusion, h.items(), h.strengths());
-            String where = fusion.rule() + ", " + size + " items:";
-            assertSameScores(before, scoring.score(h.items(), h.strengths(), null, ws), where);
-            OneResearcherScoring.Scores batch = OneResearcherScoring.score(model.foldIn(), model.y(), model.neighbours(),
-                    fusion, h.items(), h.strengths());
-            assertSameScores(batch, ws, where + " batch");
-            assertArrayEquals(OneResearcherScoring.topN(before.fused(), LIST, i -> i % 3 != 0),
-                    ws.topN(LIST, i -> i % 3 != 0), where + " top-N");
-            for (int i : h.items()) {
-                assertEquals(Double.NEGATIVE_INFINITY, ws.fused(i), where + " own item " + i);
+        for (boolean floats : new boolean[] {false, true}) {
+            Model model = Model.random(items, rank, 21L + rank, floats);
+            ResearcherScoring scoring = model.scoring(fusion);
+            // factors that are floats are read as floats by the CF product, with the same bits out
+            assertEquals(floats, scoring.readsFloatFactors());
+            ScoringWorkspace ws = scoring.newWorkspace();
+            SplittableRandom random = new SplittableRandom(4);
+            for (int size : new int[] {0, 1, 2, 7, 20, 33}) {
+                History h = History.random(random, items, size);
+                OneResearcherScoring.Scores before = ScoringAsBefore.score(model.foldIn(), model.y(), model.neighbours(),
+                        fusion, h.items(), h.strengths());
+                String where = fusion.rule() + ", " + size + " items:";
+                assertSameScores(before, scoring.score(h.items(), h.strengths(), null, ws), where);
+                OneResearcherScoring.Scores batch = OneResearcherScoring.score(model.foldIn(), model.y(), model.neighbours(),
+                        fusion, h.items(), h.strengths());
+                assertSameScores(batch, ws, where + " batch");
+                assertArrayEquals(OneResearcherScoring.topN(before.fused(), LIST, i -> i % 3 != 0),
+                        ws.topN(LIST, i -> i % 3 != 0), where + " top-N");
+                for (int i : h.items()) {
+                    assertEquals(Double.NEGATIVE_INFINITY, ws.fused(i), where + " own item " + i);
+                }
+                assertEquals(size, ws.researcherItems());
+                assertEquals(0, ws.foldInSteps(), "no warm start: exact fold-in");
             }
-            assertEquals(size, ws.researcherItems());
-            assertEquals(0, ws.foldInSteps(), "no warm start: exact fold-in");
         }
     }
 
