@@ -62,13 +62,35 @@ public final class HybridScorer implements SuggestionScorer {
         double[] x = new double[scoring.rank()];
         ws.copyVector(x);
         input.profile().keepVector(model.version(), x);
-        int[] top = ws.topN(n, i -> input.eligible().eligible(model.compoundId(i)));
+        int[] top = eligibleTop(ws, n, i -> input.eligible().eligible(model.compoundId(i)));
         List<ScoredCandidate> ranked = new ArrayList<>(top.length);
         for (int i : top) {
             ranked.add(new ScoredCandidate(model.compoundId(i), ws.cf(i), ws.semantic(i), ws.fused(i),
                     contributors(model, row, i)));
         }
         return ranked;
+    }
+
+    /**
+     * The best {@code n} eligible items, best first, ties to the smaller index: the same list as
+     * {@code ws.topN(n, eligible)}. The eligibility check reads the catalogue and the researcher's
+     * authorisations, so it is run on the head of the ranking first: when the best 2n + 8 items
+     * regardless of eligibility hold n eligible ones, those are the answer (every item further down
+     * ranks below all of them); only otherwise the full scan checks as it goes.
+     */
+    static int[] eligibleTop(ScoringWorkspace ws, int n, java.util.function.IntPredicate eligible) {
+        int[] head = ws.topN(2 * n + 8, i -> true);
+        int[] top = new int[n];
+        int found = 0;
+        for (int t = 0; t < head.length && found < n; t++) {
+            if (eligible.test(head[t])) {
+                top[found++] = head[t];
+            }
+        }
+        if (found == n) {
+            return top;
+        }
+        return ws.topN(n, eligible);
     }
 
     /** The kept vector widened for the solver, or null (no vector under this version: exact fold-in). */
