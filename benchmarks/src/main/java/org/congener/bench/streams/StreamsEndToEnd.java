@@ -72,7 +72,8 @@ import org.congener.streams.config.AppConfig;
  * from the researchers' actual history sizes), and the ideal rate 1 / (1/ceiling + work/rate). Researchers
  * and compounds are drawn with Zipf skew (a few heavy users, a long tail).
  *
- * <p>Arguments: compounds rank researchers rate(events/s) seconds burstEvents.
+ * <p>Arguments: compounds rank researchers rate(events/s) seconds burstEvents. System properties
+ * {@code guarantee} and {@code commit.interval.ms} override the app's defaults for both runs.
  */
 public final class StreamsEndToEnd {
 
@@ -147,7 +148,9 @@ public final class StreamsEndToEnd {
                 AppConfig.APPLICATION_ID, prefix + "bench",
                 AppConfig.STATE_DIR, dir.resolve(prefix + "state").toString(),
                 AppConfig.HTTP_PORT, "0",
-                AppConfig.PROCESSING_GUARANTEE, System.getProperty("guarantee", "exactly_once_v2")));
+                AppConfig.PROCESSING_GUARANTEE, System.getProperty("guarantee", "exactly_once_v2"),
+                AppConfig.COMMIT_INTERVAL_MS, System.getProperty("commit.interval.ms",
+                        Long.toString(AppConfig.defaults().commitIntervalMs()))));
         try (StreamsApp app = StreamsApp.start(config, scorer)) {
             if (!app.awaitRunning(Duration.ofMinutes(3))) {
                 throw new IllegalStateException("streams app did not reach RUNNING");
@@ -172,8 +175,9 @@ public final class StreamsEndToEnd {
                     long start = System.nanoTime();
                     for (int e = 0; e < pacedCount; e++) {
                         long due = start + (long) (e * 1e9 / rate);
-                        while (System.nanoTime() < due) {
-                            Thread.onSpinWait();
+                        // park, not spin: a spinning producer would take one of the machine's two cores
+                        for (long wait = due - System.nanoTime(); wait > 0; wait = due - System.nanoTime()) {
+                            java.util.concurrent.locks.LockSupport.parkNanos(wait);
                         }
                         send(producer, topics, "p" + e, workload, random, producedAt, null);
                     }
