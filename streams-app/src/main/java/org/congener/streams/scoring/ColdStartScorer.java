@@ -28,9 +28,6 @@ import org.congener.streams.state.InteractionProfile;
 public final class ColdStartScorer implements SuggestionScorer {
 
     static final double SEMANTIC_WEIGHT = 0.5;
-    private static final Comparator<ScoredCandidate> BEST_FIRST =
-            Comparator.comparingDouble(ScoredCandidate::fusedScore).reversed()
-                    .thenComparing(ScoredCandidate::compoundId);
 
     private final GroupPopularityScorer popularity;
     private final double halfLifeMs;
@@ -90,18 +87,7 @@ public final class ColdStartScorer implements SuggestionScorer {
                     + (1 - SEMANTIC_WEIGHT) * (maxPopularity > 0 ? p / maxPopularity : 0);
             all.add(new ScoredCandidate(c, 0, sem, fused, contributors(because.get(c), history)));
         }
-        all.sort(BEST_FIRST);
-        // the eligibility check reads the catalogue, which costs far more than the arithmetic: best first, stop at n
-        List<ScoredCandidate> ranked = new ArrayList<>(Math.min(n, all.size()));
-        for (ScoredCandidate candidate : all) {
-            if (ranked.size() == n) {
-                break;
-            }
-            if (input.eligible().eligible(candidate.compoundId())) {
-                ranked.add(candidate);
-            }
-        }
-        return ranked;
+        return ScoredCandidate.bestEligible(all, n, input.eligible());
     }
 
     private static List<String> union(java.util.Set<String> a, java.util.Set<String> b) {

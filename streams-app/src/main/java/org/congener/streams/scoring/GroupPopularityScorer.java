@@ -1,7 +1,6 @@
 package org.congener.streams.scoring;
 
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 
@@ -14,10 +13,6 @@ import org.congener.streams.state.GroupPopularity;
  * smaller compound id so that lists are reproducible.
  */
 public final class GroupPopularityScorer implements SuggestionScorer {
-
-    private static final Comparator<ScoredCandidate> BEST_FIRST =
-            Comparator.comparingDouble(ScoredCandidate::fusedScore).reversed()
-                    .thenComparing(ScoredCandidate::compoundId);
 
     private final double halfLifeMs;
 
@@ -35,8 +30,6 @@ public final class GroupPopularityScorer implements SuggestionScorer {
 
     @Override
     public List<ScoredCandidate> rank(ScoringInput input, int n) {
-        // score everything first (cheap), then check eligibility best-first and stop at n: the check
-        // reads the catalogue, which costs far more than the arithmetic
         if (input.group() == null) {
             return List.of();
         }
@@ -45,16 +38,6 @@ public final class GroupPopularityScorer implements SuggestionScorer {
             double popularity = input.group().at(entry.getKey(), input.atEpochMs(), halfLifeMs);
             all.add(new ScoredCandidate(entry.getKey(), 0, 0, popularity, List.of()));
         }
-        all.sort(BEST_FIRST);
-        List<ScoredCandidate> ranked = new ArrayList<>(Math.min(n, all.size()));
-        for (ScoredCandidate candidate : all) {
-            if (ranked.size() == n) {
-                break;
-            }
-            if (input.eligible().eligible(candidate.compoundId())) {
-                ranked.add(candidate);
-            }
-        }
-        return ranked;
+        return ScoredCandidate.bestEligible(all, n, input.eligible());
     }
 }
