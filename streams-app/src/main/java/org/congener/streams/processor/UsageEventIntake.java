@@ -72,14 +72,6 @@ public final class UsageEventIntake implements Processor<String, byte[], String,
         if (event == null) {
             throw new RecordRejectedException("empty value: usage events have no tombstones");
         }
-        if (key == null) {
-            throw new RecordRejectedException("no key: usage events are keyed by their researcher id ('"
-                    + event.researcherId() + "')");
-        }
-        if (!key.equals(event.researcherId())) {
-            throw new RecordRejectedException("key '" + key + "' is not the event's researcher '"
-                    + event.researcherId() + "'");
-        }
         try {
             Instant.parse(event.occurredAt());
         } catch (DateTimeParseException e) {
@@ -94,6 +86,15 @@ public final class UsageEventIntake implements Processor<String, byte[], String,
         }
         if (catalog.get(event.compoundId()) == null) {
             throw new RecordRejectedException("unknown compound '" + event.compoundId() + "'");
+        }
+        // the routing defect last: an event wrong in content is reported for its content
+        if (key == null) {
+            throw new RecordRejectedException("no key: usage events are keyed by their researcher id ('"
+                    + event.researcherId() + "')");
+        }
+        if (!key.equals(event.researcherId())) {
+            throw new RecordRejectedException("key '" + key + "' is not the event's researcher '"
+                    + event.researcherId() + "'");
         }
         return researcher;
     }
