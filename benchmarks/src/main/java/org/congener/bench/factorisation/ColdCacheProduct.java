@@ -1,0 +1,83 @@
+package org.congener.bench.factorisation;
+
+import java.util.Locale;
+import java.util.SplittableRandom;
+
+import org.congener.core.factorisation.DenseKernels;
+
+/**
+ * The CF product Y·x of one event with the factor matrix in cache (as a benchmark that repeats it
+ * sees it) and evicted first (as the stream thread sees it, after the broker, RocksDB and the Kafka
+ * clients ran between two events), for Y held as doubles and as floats. Eviction: a pass over a
+ * buffer far larger than the last-level cache between two products; the pass is not timed.
+ *
+ * <p>Arguments: items rank repetitions evictionMegabytes.
+ */
+public final class ColdCacheProduct {
+
+    private ColdCacheProduct() {
+    }
+
+    public static void main(String[] args) {
+        int items = args.length > 0 ? Integer.parseInt(args[0]) : 10_000;
+        int rank = args.length > 1 ? Integer.parseInt(args[1]) : 64;
+        int repetitions = args.length > 2 ? Integer.parseInt(args[2]) : 200;
+        int evictMb = args.length > 3 ? Integer.parseInt(args[3]) : 256;
+        SplittableRandom random = new SplittableRandom(7);
+        float[] narrow = new float[items * rank];
+        double[] wide = new double[items * rank];
+        for (int t = 0; t < wide.length; t++) {
+            narrow[t] = (float) random.nextGaussian();
+            wide[t] = narrow[t];
+        }
+        double[] x = random.doubles(rank, -1, 1).toArray();
+        double[] out = new double[items];
+        double[] scratch = new double[DenseKernels.WIDEN_BLOCK_ROWS * rank];
+        long[] evict = new long[evictMb * 131_072];
+        DenseKernels kernels = DenseKernels.best();
+        System.out.printf(Locale.ROOT, "%d items, rank %d, %s; %d products each, eviction buffer %d MB%n", items, rank,
+                kernels, repetitions, evictMb);
+        for (int round = 0; round < 2; round++) {
+            // round 0 warms the JIT; round 1 is reported
+            double[] hotWide = time(repetitions, () -> kernels.multiply(wide, 0, items, rank, x, 0, out, 0), null);
+            double[] hotNarrow = time(repetitions, () -> kernels.multiply(narrow, 0, items, rank, x, 0, out, 0, scratch), null);
+            double[] coldWide = time(repetitions, () -> kernels.multiply(wide, 0, items, rank, x, 0, out, 0), evict);
+            double[] coldNarrow = time(repetitions, () -> kernels.multiply(narrow, 0, items, rank, x, 0, out, 0, scratch), evict);
+            if (round == 1) {
+                report("doubles, in cache", hotWide, wide.length * 8L);
+                report("floats,  in cache", hotNarrow, narrow.length * 4L);
+                report("doubles, evicted ", coldWide, wide.length * 8L);
+                report("floats,  evicted ", coldNarrow, narrow.length * 4L);
+            }
+        }
+        System.out.println(out[items / 2] == 12345.0 ? "" : "");
+    }
+
+    /** Microseconds of each product, sorted; {@code evict} non-null: a pass over it before each product. */
+    private static double[] time(int repetitions, Runnable product, long[] evict) {
+        double[] micros = new double[repetitions];
+        long sink = 0;
+        for (int r = 0; r < repetitions; r++) {
+            if (evict != null) {
+                for (int t = 0; t < evict.length; t += 8) {
+                    evict[t] += t;
+                    sink += evict[t];
+                }
+            }
+            long t0 = System.nanoTime();
+            product.run();
+            micros[r] = (System.nanoTime() - t0) / 1e3;
+        }
+        if (sink == 42) {
+            System.out.print("");
+        }
+        java.util.Arrays.sort(micros);
+        return micros;
+    }
+
+    private static void report(String what, double[] micros, long bytes) {
+        double median = micros[micros.length / 2];
+        System.out.printf(Locale.ROOT, "%s: median %.0f µs (min %.0f, p90 %.0f), %.1f GB/s of factors%n", what,
+                median, micros[0], micros[(int) (micros.length * 0.9)], bytes / median / 1e3);
+    }
+}
