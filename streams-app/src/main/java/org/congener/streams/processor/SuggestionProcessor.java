@@ -160,6 +160,10 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         int rank = 1;
         for (ScoredCandidate c : ranked) {
             CatalogEntry entry = catalog.get(c.compoundId());
+            if (entry == null) {
+                // removed from the catalogue by the global thread since the filter passed it
+                continue;
+            }
             SharedTerms.Term shared = sharedTerm(entry, c);
             items.add(new Suggestion(rank++, c.compoundId(), entry.name(), c.cfScore(), c.semanticScore(),
                     c.fusedScore(), c.contributors(), shared == null ? null : shared.id(),
