@@ -123,6 +123,10 @@ public final class StreamsEndToEnd {
                     dotRate / 1e9, work / dotRate * 1e6);
             System.out.printf(Locale.ROOT, "ideal 1/(1/ceiling + work/rate) = %.0f events/s; app reaches %.2f of it%n",
                     ideal, app.sustainedPerSecond() / ideal);
+            // the same with the rate of the length-64 dot products, the yardstick of earlier figures
+            double dotIdeal = 1.0 / (1.0 / ceiling.sustainedPerSecond() + work / dotRate);
+            System.out.printf(Locale.ROOT, "  (at the length-64 dot rate instead of the peak: ideal %.0f events/s,"
+                    + " app reaches %.2f of it)%n", dotIdeal, app.sustainedPerSecond() / dotIdeal);
             System.out.printf(Locale.ROOT, "interaction store: %.0f bytes per researcher over %d researchers%n",
                     app.storeBytesPerResearcher(), app.researchersStored());
             System.out.printf(Locale.ROOT, "broker and state dirs after the runs: %.1f MB%n", sizeMb(dir));
