@@ -99,6 +99,8 @@ public final class QueryServer implements AutoCloseable {
             Response response;
             try {
                 response = route(exchange);
+            } catch (BadRequest e) {
+                response = error(400, e.getMessage());
             } catch (SuggestionQueries.NotReadyException e) {
                 response = error(503, e.getMessage());
             } catch (RuntimeException e) {
@@ -142,33 +144,9 @@ public final class QueryServer implements AutoCloseable {
     }
 
     private Response suggestions(String researcherId, String rawQuery, boolean forwarded) {
-        Map<String, String> params;
-        try {
-            params = parseQuery(rawQuery);
-        } catch (IllegalArgumentException e) {
-            return error(400, e.getMessage());
-        }
-        for (String name : params.keySet()) {
-            if (!name.equals("n") && !name.equals("inStock")) {
-                return error(400, "unknown parameter '" + name + "' (n and inStock are supported)");
-            }
-        }
-        Boolean inStock = flag(params, "inStock");
-        if (inStock == null) {
-            return error(400, "inStock must be true or false, got '" + params.get("inStock") + "'");
-        }
-        int n = queries.maxItems();
-        if (params.containsKey("n")) {
-            String value = params.get("n");
-            try {
-                n = Integer.parseInt(value);
-            } catch (NumberFormatException e) {
-                n = -1;
-            }
-            if (n < 1 || n > queries.maxItems()) {
-                return error(400, "n must be a whole number from 1 to " + queries.maxItems() + ", got '" + value + "'");
-            }
-        }
+        ListParams params = ListParams.parse(rawQuery, queries.maxItems(), queries.maxItems());
+        int n = params.n();
+        boolean inStock = params.inStock();
         if (!queries.isKnownResearcher(researcherId)) {
             return error(404, "unknown researcher '" + researcherId + "'");
         }
@@ -187,33 +165,9 @@ public final class QueryServer implements AutoCloseable {
     }
 
     private Response alternatives(String compoundId, String rawQuery) {
-        Map<String, String> params;
-        try {
-            params = parseQuery(rawQuery);
-        } catch (IllegalArgumentException e) {
-            return error(400, e.getMessage());
-        }
-        for (String name : params.keySet()) {
-            if (!name.equals("n") && !name.equals("inStock")) {
-                return error(400, "unknown parameter '" + name + "' (n and inStock are supported)");
-            }
-        }
-        int n = 10;
-        if (params.containsKey("n")) {
-            String value = params.get("n");
-            try {
-                n = Integer.parseInt(value);
-            } catch (NumberFormatException e) {
-                n = -1;
-            }
-            if (n < 1 || n > MAX_ALTERNATIVES) {
-                return error(400, "n must be a whole number from 1 to " + MAX_ALTERNATIVES + ", got '" + value + "'");
-            }
-        }
-        Boolean inStock = flag(params, "inStock");
-        if (inStock == null) {
-            return error(400, "inStock must be true or false, got '" + params.get("inStock") + "'");
-        }
+        ListParams params = ListParams.parse(rawQuery, 10, MAX_ALTERNATIVES);
+        int n = params.n();
+        boolean inStock = params.inStock();
         if (!queries.isKnownCompound(compoundId)) {
             return error(404, "unknown compound '" + compoundId + "'");
         }
@@ -228,10 +182,47 @@ public final class QueryServer implements AutoCloseable {
         return new Response(200, body);
     }
 
-    /** A true/false parameter: false when absent, null when its value is neither. */
-    private static Boolean flag(Map<String, String> params, String name) {
-        String value = params.getOrDefault(name, "false");
-        return value.equals("true") ? Boolean.TRUE : value.equals("false") ? Boolean.FALSE : null;
+    /** The parameters both list requests take: how many items, and in stock only or not. */
+    private record ListParams(int n, boolean inStock) {
+
+        /** @throws BadRequest naming the parameter and value that cannot be used */
+        static ListParams parse(String rawQuery, int defaultN, int maxN) {
+            Map<String, String> params;
+            try {
+                params = parseQuery(rawQuery);
+            } catch (IllegalArgumentException e) {
+                throw new BadRequest(e.getMessage());
+            }
+            for (String name : params.keySet()) {
+                if (!name.equals("n") && !name.equals("inStock")) {
+                    throw new BadRequest("unknown parameter '" + name + "' (n and inStock are supported)");
+                }
+            }
+            int n = defaultN;
+            String value = params.get("n");
+            if (value != null) {
+                try {
+                    n = Integer.parseInt(value);
+                } catch (NumberFormatException e) {
+                    n = -1;
+                }
+                if (n < 1 || n > maxN) {
+                    throw new BadRequest("n must be a whole number from 1 to " + maxN + ", got '" + value + "'");
+                }
+            }
+            String stock = params.getOrDefault("inStock", "false");
+            if (!stock.equals("true") && !stock.equals("false")) {
+                throw new BadRequest("inStock must be true or false, got '" + stock + "'");
+            }
+            return new ListParams(n, stock.equals("true"));
+        }
+    }
+
+    /** A request whose parameters cannot be used: answered 400 with the message. */
+    private static final class BadRequest extends RuntimeException {
+        BadRequest(String message) {
+            super(message);
+        }
     }
 
     static Map<String, String> parseQuery(String rawQuery) {
