@@ -13,7 +13,6 @@ import org.apache.kafka.streams.state.QueryableStoreTypes;
 import org.apache.kafka.streams.state.ReadOnlyKeyValueStore;
 import org.congener.schemas.CatalogEntry;
 import org.congener.schemas.InventoryEvent;
-import org.congener.schemas.Researcher;
 import org.congener.streams.model.Alternatives;
 import org.congener.streams.model.LiveModel;
 import org.congener.streams.model.ModelAssembler;
@@ -69,35 +68,19 @@ public final class StoreSuggestionQueries implements SuggestionQueries {
                 return remote.fetch(metadata.activeHost(), researcherId);
             }
         }
-        ReadOnlyKeyValueStore<String, byte[]> store = store(app, SuggestionTopology.LATEST_SUGGESTIONS_STORE);
-        try {
-            // the store holds the JSON the app published; read without a schema check, it wrote them itself
-            return Optional.ofNullable(LIST_READER.deserialize(null, store.get(researcherId)));
-        } catch (InvalidStateStoreException e) {
-            throw notReady(app, SuggestionTopology.LATEST_SUGGESTIONS_STORE);
-        }
+        // the store holds the JSON the app published; read without a schema check, it wrote them itself
+        byte[] json = get(app, SuggestionTopology.LATEST_SUGGESTIONS_STORE, researcherId);
+        return Optional.ofNullable(LIST_READER.deserialize(null, json));
     }
 
     @Override
     public boolean isKnownResearcher(String researcherId) {
-        KafkaStreams app = running();
-        ReadOnlyKeyValueStore<String, Researcher> store = store(app, SuggestionTopology.RESEARCHERS_STORE);
-        try {
-            return store.get(researcherId) != null;
-        } catch (InvalidStateStoreException e) {
-            throw notReady(app, SuggestionTopology.RESEARCHERS_STORE);
-        }
+        return get(running(), SuggestionTopology.RESEARCHERS_STORE, researcherId) != null;
     }
 
     @Override
     public boolean isKnownCompound(String compoundId) {
-        KafkaStreams app = running();
-        ReadOnlyKeyValueStore<String, CatalogEntry> store = store(app, SuggestionTopology.CATALOG_STORE);
-        try {
-            return store.get(compoundId) != null;
-        } catch (InvalidStateStoreException e) {
-            throw notReady(app, SuggestionTopology.CATALOG_STORE);
-        }
+        return get(running(), SuggestionTopology.CATALOG_STORE, compoundId) != null;
     }
 
     @Override
@@ -127,11 +110,17 @@ public final class StoreSuggestionQueries implements SuggestionQueries {
 
     @Override
     public boolean isInStock(String compoundId) {
-        KafkaStreams app = running();
+        InventoryEvent last = get(running(), SuggestionTopology.STOCK_STORE, compoundId);
+        return last != null && last.quantityOnHand() > 0;
+    }
+
+    /** The value under {@code key} in this instance's store {@code name}, or null; 503 while not queryable. */
+    private static <V> V get(KafkaStreams app, String name, String key) {
+        ReadOnlyKeyValueStore<String, V> store = store(app, name);
         try {
-            return inStock(store(app, SuggestionTopology.STOCK_STORE), compoundId);
+            return store.get(key);
         } catch (InvalidStateStoreException e) {
-            throw notReady(app, SuggestionTopology.STOCK_STORE);
+            throw notReady(app, name);
         }
     }
 
