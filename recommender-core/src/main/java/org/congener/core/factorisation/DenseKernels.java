@@ -47,6 +47,46 @@ public interface DenseKernels {
         }
     }
 
+    /**
+     * The product of one block with several vectors: out_c[outOff+r] = Σ_t a[aOff+r·n+t]·x_c[t] for
+     * r &lt; rows and c &lt; count. Each block of up to {@link #WIDEN_BLOCK_ROWS} rows is widened into
+     * {@code scratch} once and multiplied with every x_c by
+     * {@link #multiply(double[], int, int, int, double[], int, double[], int)}, so the factors come from
+     * memory once for all {@code count} vectors (the CF scores of several researchers in one pass), and
+     * each out_c equals the one-vector product bit for bit. Modifies {@code outs} and {@code scratch}.
+     */
+    default void multiplyMany(float[] a, int aOff, int rows, int n, double[][] xs, int count, double[][] outs,
+                              int outOff, double[] scratch) {
+        for (int r = 0; r < rows; r += WIDEN_BLOCK_ROWS) {
+            int block = Math.min(WIDEN_BLOCK_ROWS, rows - r);
+            int from = aOff + r * n;
+            for (int t = 0; t < block * n; t++) {
+                scratch[t] = a[from + t];
+            }
+            for (int c = 0; c < count; c++) {
+                multiply(scratch, 0, block, n, xs[c], 0, outs[c], outOff + r);
+            }
+        }
+    }
+
+    /** The same for factors held as doubles: each row block is used for all vectors while it is in cache. */
+    default void multiplyMany(double[] a, int aOff, int rows, int n, double[][] xs, int count, double[][] outs,
+                              int outOff) {
+        for (int r = 0; r < rows; r += WIDEN_BLOCK_ROWS) {
+            int block = Math.min(WIDEN_BLOCK_ROWS, rows - r);
+            for (int c = 0; c < count; c++) {
+                multiply(a, aOff + r * n, block, n, xs[c], 0, outs[c], outOff + r);
+            }
+        }
+    }
+
+    /**
+     * The least and the greatest of v[from..to) by {@link Math#min} and {@link Math#max} (so −0.0 is
+     * below 0.0, and a NaN anywhere makes both NaN), into {@code into[0]} and {@code into[1]}; +∞ and
+     * −∞ for an empty range. Both are exact whatever order the entries are taken in.
+     */
+    void minMax(double[] v, int from, int to, double[] into);
+
     /** The plain-loop implementation. */
     static DenseKernels scalar() {
         return ScalarKernels.INSTANCE;

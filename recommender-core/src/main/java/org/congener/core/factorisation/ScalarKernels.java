@@ -77,6 +77,18 @@ final class ScalarKernels implements DenseKernels {
     }
 
     @Override
+    public void minMax(double[] v, int from, int to, double[] into) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (int t = from; t < to; t++) {
+            lo = Math.min(lo, v[t]);
+            hi = Math.max(hi, v[t]);
+        }
+        into[0] = lo;
+        into[1] = hi;
+    }
+
+    @Override
     public String toString() {
         return "scalar";
     }

@@ -146,6 +146,27 @@ final class VectorKernels implements DenseKernels {
         }
     }
 
+    @Override
+    public void minMax(double[] v, int from, int to, double[] into) {
+        int lanes = SPECIES.length();
+        DoubleVector lo = DoubleVector.broadcast(SPECIES, Double.POSITIVE_INFINITY);
+        DoubleVector hi = DoubleVector.broadcast(SPECIES, Double.NEGATIVE_INFINITY);
+        int t = from;
+        for (; t + lanes <= to; t += lanes) {
+            DoubleVector block = DoubleVector.fromArray(SPECIES, v, t);
+            lo = lo.lanewise(VectorOperators.MIN, block);
+            hi = hi.lanewise(VectorOperators.MAX, block);
+        }
+        double least = lo.reduceLanes(VectorOperators.MIN);
+        double greatest = hi.reduceLanes(VectorOperators.MAX);
+        for (; t < to; t++) {
+            least = Math.min(least, v[t]);
+            greatest = Math.max(greatest, v[t]);
+        }
+        into[0] = least;
+        into[1] = greatest;
+    }
+
     private static DoubleVector widened(float[] a, int offset) {
         return (DoubleVector) FloatVector.fromArray(FLOAT_SPECIES, a, offset)
                 .convertShape(VectorOperators.F2D, SPECIES, 0);

@@ -1,5 +1,7 @@
 package org.congener.core.fusion;
 
+import org.congener.core.factorisation.DenseKernels;
+
 /**
  * Fuses one researcher's CF and semantic scores into a preallocated array (DESIGN.md, "Scoring"). CF
  * scores can be negative, so both sides are first min–max normalised to [0, 1] over the researcher's
@@ -17,7 +19,11 @@ package org.congener.core.fusion;
  * is made. One instance serves one thread: it keeps the rank order's arrays, made on first use.
  */
 final class ScoreFusion {
+    private static final DenseKernels KERNELS = DenseKernels.best();
+
     private final int itemCount;
+    /** Least and greatest of one run of candidates, from the kernel. */
+    private final double[] runRange = new double[2];
     private RankOrder rankOrder;
     /** 1/(k + r) for ranks r = 1..n at {@link #reciprocalK}: the same quotients, divided once per k. */
     private double[] reciprocalRank;
@@ -113,9 +119,36 @@ final class ScoreFusion {
 
     /**
      * Lowest finite score and span (highest − lowest) over the candidates, i.e. skipping the sorted
-     * training items; into {@link #lowest}, {@link #span} and {@link #plainScale}.
+     * training items; into {@link #lowest}, {@link #span} and {@link #plainScale}. The runs of
+     * candidates between training items go through the vector kernel's min and max; when both come out
+     * finite every candidate was finite, and Math.min and Math.max give the same answer in any order, so
+     * this is the scalar loop's result. Otherwise (a NaN or an infinity among the candidates, or none)
+     * the scalar loop decides.
      */
     private void range(double[] v, int[] training, int from, int to) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        int start = 0;
+        for (int p = from; p <= to; p++) {
+            int end = p < to ? training[p] : itemCount;
+            if (end > start) {
+                KERNELS.minMax(v, start, end, runRange);
+                lo = Math.min(lo, runRange[0]);
+                hi = Math.max(hi, runRange[1]);
+            }
+            start = Math.max(start, end + 1);
+        }
+        if (Double.isFinite(lo) && Double.isFinite(hi)) {
+            lowest = lo;
+            span = hi - lo;
+            plainScale = span > 0;
+            return;
+        }
+        scalarRange(v, training, from, to);
+    }
+
+    /** {@link #range} one item at a time, skipping non-finite scores. */
+    private void scalarRange(double[] v, int[] training, int from, int to) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         boolean allFinite = true;

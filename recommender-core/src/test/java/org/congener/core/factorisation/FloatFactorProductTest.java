@@ -39,4 +39,48 @@ class FloatFactorProductTest {
             }
         }
     }
+
+    @Test
+    void shouldGiveEachVectorItsOneVectorProductBitForBitWhenSeveralAreMultipliedInOnePass() {
+        SplittableRandom random = new SplittableRandom(23);
+        int[] ranks = {1, 9, 64, 67};
+        int[] rowCounts = {0, 3, DenseKernels.WIDEN_BLOCK_ROWS, 2 * DenseKernels.WIDEN_BLOCK_ROWS + 5, 1000};
+        for (DenseKernels kernels : new DenseKernels[] {DenseKernels.best(), DenseKernels.scalar()}) {
+            for (int n : ranks) {
+                for (int rows : rowCounts) {
+                    float[] narrow = new float[3 + rows * n];
+                    double[] wide = new double[narrow.length];
+                    for (int t = 0; t < narrow.length; t++) {
+                        narrow[t] = (float) random.nextGaussian(0, 0.3);
+                        wide[t] = narrow[t];
+                    }
+                    int count = 1 + random.nextInt(9);
+                    double[][] xs = new double[count + 1][n];
+                    for (double[] x : xs) {
+                        for (int t = 0; t < n; t++) {
+                            x[t] = random.nextGaussian();
+                        }
+                    }
+                    double[][] fromFloats = new double[count + 1][rows + 2];
+                    double[][] fromDoubles = new double[count + 1][rows + 2];
+                    double[] scratch = new double[DenseKernels.WIDEN_BLOCK_ROWS * n];
+                    kernels.multiplyMany(narrow, 3, rows, n, xs, count, fromFloats, 2, scratch);
+                    kernels.multiplyMany(wide, 3, rows, n, xs, count, fromDoubles, 2);
+                    for (int c = 0; c <= count; c++) {
+                        double[] expected = new double[rows + 2];
+                        if (c < count) {
+                            kernels.multiply(narrow, 3, rows, n, xs[c], 0, expected, 2, scratch);
+                        }
+                        String where = kernels + ", rank " + n + ", rows " + rows + ", vector " + c + " of " + count;
+                        for (int r = 0; r < rows + 2; r++) {
+                            assertEquals(Double.doubleToLongBits(expected[r]), Double.doubleToLongBits(fromFloats[c][r]),
+                                    where + ", row " + r + " (floats)");
+                            assertEquals(Double.doubleToLongBits(expected[r]), Double.doubleToLongBits(fromDoubles[c][r]),
+                                    where + ", row " + r + " (doubles)");
+                        }
+                    }
+                }
+            }
+        }
+    }
 }

@@ -18,10 +18,10 @@ class ScoreFusionTest {
         SplittableRandom random = new SplittableRandom(41);
         ScoreFusion fusion = new ScoreFusion(ITEMS);
         double[] out = new double[ITEMS];
-        for (int round = 0; round < 60; round++) {
+        for (int round = 0; round < 96; round++) {
             int[] training = random.ints(random.nextInt(6), 0, ITEMS).sorted().distinct().toArray();
-            double[] cf = side(random, round % 3);
-            double[] semantic = side(random, (round / 3) % 3);
+            double[] cf = side(random, round % 4);
+            double[] semantic = side(random, (round / 4) % 4);
             for (FusionSettings settings : new FusionSettings[] {FusionSettings.product(), FusionSettings.blend(0.7),
                     FusionSettings.rankFusion(60), new FusionSettings(FusionRule.CF_ONLY, 1, 60, 0),
                     new FusionSettings(FusionRule.SEMANTIC_ONLY, 0, 60, 0)}) {
@@ -37,11 +37,18 @@ class ScoreFusionTest {
         }
     }
 
-    /** 0: plain Gaussian scores; 1: a few infinities and NaNs among them; 2: all equal. */
+    /**
+     * 0: plain Gaussian scores; 1: a few infinities and NaNs among them; 2: all equal; 3: zeros of both
+     * signs and a few small values (where min and max must tell −0.0 from 0.0).
+     */
     private static double[] side(SplittableRandom random, int kind) {
         double[] v = new double[ITEMS];
         for (int i = 0; i < ITEMS; i++) {
-            v[i] = kind == 2 ? 0.25 : random.nextGaussian();
+            v[i] = switch (kind) {
+                case 2 -> 0.25;
+                case 3 -> random.nextInt(8) == 0 ? random.nextDouble() - 0.5 : random.nextBoolean() ? 0.0 : -0.0;
+                default -> random.nextGaussian();
+            };
         }
         if (kind == 1) {
             v[random.nextInt(ITEMS)] = Double.NaN;
