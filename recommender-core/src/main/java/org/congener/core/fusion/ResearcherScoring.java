@@ -103,6 +103,76 @@ public final class ResearcherScoring {
      * @param ws        this thread's workspace; overwritten
      */
     public ScoringWorkspace score(int[] items, double[] strengths, double[] warmStart, ScoringWorkspace ws) {
+        check(items, strengths, ws);
+        ws.sortItems(items, strengths);
+        foldInto(items, strengths, warmStart, ws);
+        if (narrowFactors != null) {
+            KERNELS.multiply(narrowFactors, 0, itemCount(), rank(), ws.vector, 0, ws.cf, 0, ws.widened);
+        } else {
+            KERNELS.multiply(itemFactors.data(), 0, itemCount(), rank(), ws.vector, 0, ws.cf, 0);
+        }
+        semanticAndFusion(items.length, ws);
+        return ws;
+    }
+
+    /**
+     * The fold-in alone, for a caller that scores later with other researchers in a {@link ScoringBatch}:
+     * x_u as {@link #score} computes it, left in {@code ws} (read it with {@link
+     * ScoringWorkspace#copyVector}). The arguments are those of {@link #score}.
+     */
+    public ScoringWorkspace foldIn(int[] items, double[] strengths, double[] warmStart, ScoringWorkspace ws) {
+        check(items, strengths, ws);
+        ws.sortItems(items, strengths);
+        foldInto(items, strengths, warmStart, ws);
+        return ws;
+    }
+
+    /** An empty batch for up to {@code capacity} researchers under this model. */
+    public ScoringBatch newBatch(int capacity) {
+        return new ScoringBatch(capacity, itemCount(), rank());
+    }
+
+    /**
+     * The CF scores of every column of {@code batch}, Y·[x_1 … x_B], in one pass over the item factors:
+     * each column's scores equal the single product of {@link #score} bit for bit
+     * ({@link DenseKernels#multiplyMany}). {@code ws} lends its widening scratch.
+     */
+    public void multiplyBatch(ScoringBatch batch, ScoringWorkspace ws) {
+        if (!batch.fits(itemCount(), rank()) || !ws.fits(itemCount(), rank())) {
+            throw new IllegalArgumentException("batch or workspace made for another model size");
+        }
+        if (narrowFactors != null) {
+            KERNELS.multiplyMany(narrowFactors, 0, itemCount(), rank(), batch.vectors, batch.size, batch.cf, 0,
+                    ws.widened);
+        } else {
+            KERNELS.multiplyMany(itemFactors.data(), 0, itemCount(), rank(), batch.vectors, batch.size, batch.cf, 0);
+        }
+        batch.multiplied = true;
+    }
+
+    /**
+     * Scores column {@code column} of a multiplied batch into {@code ws} and returns it: the same scores
+     * as {@link #score} with that column's vector, bit for bit. {@code items} and {@code strengths} are
+     * the researcher's history the vector was folded in from. The column's CF scores move into the
+     * workspace (its arrays are exchanged, nothing is copied), so each column is scored once per batch.
+     */
+    public ScoringWorkspace scoreColumn(ScoringBatch batch, int column, int[] items, double[] strengths,
+                                        ScoringWorkspace ws) {
+        check(items, strengths, ws);
+        if (!batch.fits(itemCount(), rank()) || !batch.multiplied || column < 0 || column >= batch.size) {
+            throw new IllegalArgumentException("column " + column + " of a batch of " + batch.size
+                    + (batch.multiplied ? "" : " not multiplied yet") + " for this model");
+        }
+        double[] scores = batch.cf[column];
+        batch.cf[column] = ws.cf;
+        ws.cf = scores;
+        System.arraycopy(batch.vectors[column], 0, ws.vector, 0, rank());
+        ws.sortItems(items, strengths);
+        semanticAndFusion(items.length, ws);
+        return ws;
+    }
+
+    private void check(int[] items, double[] strengths, ScoringWorkspace ws) {
         if (!ws.fits(itemCount(), rank())) {
             throw new IllegalArgumentException("workspace for " + ws.itemCount() + " items at rank " + ws.rank()
                     + ", model has " + itemCount() + " at rank " + rank());
@@ -110,20 +180,15 @@ public final class ResearcherScoring {
         if (items.length != strengths.length) {
             throw new IllegalArgumentException(items.length + " items but " + strengths.length + " strengths");
         }
-        ws.sortItems(items, strengths);
-        foldIn(items, strengths, warmStart, ws);
-        if (narrowFactors != null) {
-            KERNELS.multiply(narrowFactors, 0, itemCount(), rank(), ws.vector, 0, ws.cf, 0, ws.widened);
-        } else {
-            KERNELS.multiply(itemFactors.data(), 0, itemCount(), rank(), ws.vector, 0, ws.cf, 0);
-        }
-        SemanticScorer.scoreInto(ws.sortedItems, ws.sortedStrengths, 0, items.length, neighbours,
-                SemanticAggregation.MEAN, ws.semantic);
-        ws.fusion.fuse(fusion, ws.cf, ws.semantic, ws.sortedItems, 0, items.length, ws.fused);
-        return ws;
     }
 
-    private void foldIn(int[] items, double[] strengths, double[] warmStart, ScoringWorkspace ws) {
+    private void semanticAndFusion(int researcherItems, ScoringWorkspace ws) {
+        SemanticScorer.scoreInto(ws.sortedItems, ws.sortedStrengths, 0, researcherItems, neighbours,
+                SemanticAggregation.MEAN, ws.semantic);
+        ws.fusion.fuse(fusion, ws.cf, ws.semantic, ws.sortedItems, 0, researcherItems, ws.fused);
+    }
+
+    private void foldInto(int[] items, double[] strengths, double[] warmStart, ScoringWorkspace ws) {
         if (items.length == 0) {
             // no interactions: x_u = 0 (the minimiser of λ‖x‖² + Σ_i (x·y_i)²)
             java.util.Arrays.fill(ws.vector, 0.0);

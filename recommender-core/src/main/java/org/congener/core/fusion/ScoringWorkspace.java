@@ -11,7 +11,8 @@ import org.congener.core.factorisation.FoldIn;
  */
 public final class ScoringWorkspace {
     final double[] vector;
-    final double[] cf;
+    /** Not final: a batch column's scores are exchanged in ({@link ResearcherScoring#scoreColumn}). */
+    double[] cf;
     final double[] semantic;
     final double[] fused;
     final ScoreFusion fusion;

@@ -270,4 +270,61 @@ class ResearcherScoringTest {
         assertTrue(replaced.fits(50, 8));
         assertTrue(scoring.workspaceFor(null).fits(50, 8));
     }
+
+    @ParameterizedTest
+    @MethodSource("rules")
+    void shouldEqualOneResearcherAtATimeBitForBitWhenResearchersAreScoredTogetherInABatch(FusionSettings fusion) {
+        for (boolean floats : new boolean[] {false, true}) {
+            Model model = Model.random(257, 13, 31L, floats);
+            ResearcherScoring scoring = model.scoring(fusion);
+            SplittableRandom random = new SplittableRandom(12);
+            ScoringWorkspace alone = scoring.newWorkspace();
+            ScoringWorkspace batched = scoring.newWorkspace();
+            ScoringBatch batch = scoring.newBatch(5);
+            // batches filled to capacity and short ones, reused; warm starts on every other researcher
+            for (int size : new int[] {5, 3, 1, 5}) {
+                History[] histories = new History[size];
+                double[][] starts = new double[size][];
+                batch.clear();
+                for (int b = 0; b < size; b++) {
+                    histories[b] = History.random(random, 257, random.nextInt(40));
+                    starts[b] = b % 2 == 0 || histories[b].items().length == 0 ? null
+                            : kept(scoring.score(histories[b].items(), histories[b].strengths(), null,
+                                    scoring.newWorkspace()));
+                    scoring.foldIn(histories[b].items(), histories[b].strengths(), starts[b], batched);
+                    assertEquals(b, batch.add(kept(batched)));
+                }
+                assertEquals(size == 5, batch.isFull());
+                scoring.multiplyBatch(batch, batched);
+                for (int b = 0; b < size; b++) {
+                    History h = histories[b];
+                    scoring.score(h.items(), h.strengths(), starts[b], alone);
+                    OneResearcherScoring.Scores expected = new OneResearcherScoring.Scores(alone.vector.clone(),
+                            alone.cf.clone(), alone.semantic.clone(), alone.fused.clone());
+                    scoring.scoreColumn(batch, b, h.items(), h.strengths(), batched);
+                    assertSameScores(expected, batched, fusion.rule() + (floats ? " floats" : " doubles")
+                            + ", batch of " + size + ", column " + b + ":");
+                }
+            }
+        }
+    }
+
+    @Test
+    void shouldRefuseAColumnWhenTheBatchWasNotMultipliedOrTheColumnIsOutside() {
+        Model model = Model.random(101, 9, 3L);
+        ResearcherScoring scoring = model.scoring(FusionSettings.blend(0.5));
+        ScoringWorkspace ws = scoring.newWorkspace();
+        ScoringBatch batch = scoring.newBatch(2);
+        batch.add(new double[9]);
+        assertThrows(IllegalArgumentException.class,
+                () -> scoring.scoreColumn(batch, 0, new int[0], new double[0], ws), "not multiplied");
+        scoring.multiplyBatch(batch, ws);
+        assertThrows(IllegalArgumentException.class,
+                () -> scoring.scoreColumn(batch, 1, new int[0], new double[0], ws), "column past the size");
+        batch.add(new double[9]);
+        assertThrows(IllegalStateException.class, () -> batch.add(new double[9]), "full");
+        assertThrows(IllegalArgumentException.class,
+                () -> Model.random(101, 8, 3L).scoring(FusionSettings.blend(0.5)).multiplyBatch(batch,
+                        Model.random(101, 8, 3L).scoring(FusionSettings.blend(0.5)).newWorkspace()), "other rank");
+    }
 }
