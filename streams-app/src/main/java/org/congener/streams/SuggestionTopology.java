@@ -46,7 +46,8 @@ import org.congener.streams.state.InteractionProfileSerde;
  * <pre>
  * usage-events (raw bytes, keyed by researcher) ─▶ intake ─┬─ rejected ─▶ dead-letters
  *                                                          └─ accepted ─▶ suggest ─▶ suggestions
- *     suggest's stores: researcher-interactions, latest-suggestions, group-popularity (cold start only)
+ *     suggest's stores: researcher-interactions, latest-suggestions, pending-lists,
+ *                       group-popularity (cold start only)
  * catalog, researchers, inventory-events ─▶ global stores ─▶ in-memory tables read by intake and suggest
  * model-item-factors, item-neighbours, model-manifests ─▶ global stores ─▶ model assembler ─▶ live snapshot
  * </pre>
@@ -57,12 +58,19 @@ import org.congener.streams.state.InteractionProfileSerde;
  * group, for group popularity, and ran at about 300 events/s with seconds of latency; BENCHMARKS.md).
  * The latest list per researcher is written by suggest itself, as the same JSON bytes it publishes,
  * into a store partitioned like {@code usage-events} that the query API reads.
+ *
+ * <p>Suggest gathers events into batches (up to {@code scoring.batch.events}, waiting at most
+ * {@code scoring.batch.wait.ms}) so that one pass over the item factors scores them all; each event
+ * is still folded in as it comes and gets its own list. A researcher with a begun but unpublished list
+ * is marked in {@code pending-lists}, which is changelogged with the rest of the state, so a commit
+ * taken while a batch waits loses nothing: whoever owns the task next publishes those lists.
  */
 public final class SuggestionTopology {
 
     public static final String INTERACTIONS_STORE = "researcher-interactions";
     public static final String GROUP_POPULARITY_STORE = "group-popularity";
     public static final String LATEST_SUGGESTIONS_STORE = "latest-suggestions";
+    public static final String PENDING_LISTS_STORE = "pending-lists";
     public static final String CATALOG_STORE = "catalog-table";
     public static final String RESEARCHERS_STORE = "researchers-table";
     public static final String STOCK_STORE = "stock-table";
@@ -71,9 +79,16 @@ public final class SuggestionTopology {
     public static final String MANIFESTS_STORE = "model-manifests-store";
 
     /** What the topology needs besides the builder. */
-    public record Settings(String topicPrefix, int topN, Duration popularityHalfLife, boolean inStockOnly) {
+    public record Settings(String topicPrefix, int topN, Duration popularityHalfLife, boolean inStockOnly,
+                           SuggestionProcessor.Batching batching) {
+        /** Each list published while its event is processed, no in-stock filter. */
         public Settings(String topicPrefix, int topN, Duration popularityHalfLife) {
             this(topicPrefix, topN, popularityHalfLife, false);
+        }
+
+        /** Each list published while its event is processed. */
+        public Settings(String topicPrefix, int topN, Duration popularityHalfLife, boolean inStockOnly) {
+            this(topicPrefix, topN, popularityHalfLife, inStockOnly, SuggestionProcessor.Batching.NONE);
         }
 
         public Settings {
@@ -86,7 +101,8 @@ public final class SuggestionTopology {
         }
 
         public static Settings from(AppConfig config) {
-            return new Settings(config.topicPrefix(), config.topN(), config.popularityHalfLife(), config.inStockOnly());
+            return new Settings(config.topicPrefix(), config.topN(), config.popularityHalfLife(), config.inStockOnly(),
+                    new SuggestionProcessor.Batching(config.batchEvents(), Duration.ofMillis(config.batchWaitMs())));
         }
 
     }
@@ -135,6 +151,10 @@ public final class SuggestionTopology {
                 Serdes.String(), new GroupPopularitySerde()).withCachingEnabled());
         builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(LATEST_SUGGESTIONS_STORE),
                 Serdes.String(), Serdes.ByteArray()).withCachingEnabled());
+        // caching: a mark set and cleared within one commit interval reaches RocksDB and the changelog
+        // as one delete; only a mark still set at a commit is kept, for whoever owns the task next
+        builder.addStateStore(Stores.keyValueStoreBuilder(Stores.persistentKeyValueStore(PENDING_LISTS_STORE),
+                Serdes.String(), Serdes.String()).withCachingEnabled());
 
         Topic<UsageEvent> usage = topics.usageEvents();
         KStream<String, Intake> intake = builder
@@ -147,7 +167,7 @@ public final class SuggestionTopology {
                 .to(deadLetters.name(), Produced.with(deadLetters.keySerde(), deadLetters.valueSerde()));
 
         SuggestionProcessor.Stores stores = new SuggestionProcessor.Stores(INTERACTIONS_STORE, GROUP_POPULARITY_STORE,
-                LATEST_SUGGESTIONS_STORE, researchers, catalog, stock);
+                LATEST_SUGGESTIONS_STORE, PENDING_LISTS_STORE, researchers, catalog, stock);
         double halfLifeMs = settings.popularityHalfLife().toMillis();
         Topic<Suggestions> suggestions = topics.suggestions();
         // the lists are this app's own output, built from checked values: written without a schema check
@@ -155,8 +175,9 @@ public final class SuggestionTopology {
         intake.filter((key, value) -> value.isAccepted())
                 .mapValues(Intake::event)
                 .process(() -> new SuggestionProcessor(stores, scorer, models::live, InteractionWeights.defaults(),
-                        halfLifeMs, settings.topN(), settings.inStockOnly(), sharedTerms, listWriter),
-                        INTERACTIONS_STORE, GROUP_POPULARITY_STORE, LATEST_SUGGESTIONS_STORE)
+                        halfLifeMs, settings.topN(), settings.inStockOnly(), sharedTerms, listWriter,
+                        settings.batching()),
+                        INTERACTIONS_STORE, GROUP_POPULARITY_STORE, LATEST_SUGGESTIONS_STORE, PENDING_LISTS_STORE)
                 .to(suggestions.name(), Produced.with(suggestions.keySerde(), Serdes.ByteArray()));
         return models;
     }

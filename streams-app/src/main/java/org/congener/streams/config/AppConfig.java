@@ -36,6 +36,8 @@ public final class AppConfig extends AbstractConfig {
     public static final String POPULARITY_HALF_LIFE_HOURS = "popularity.half.life.hours";
     public static final String IN_STOCK_ONLY = "suggestions.in.stock.only";
     public static final String ONTOLOGY_FILE = "ontology.file";
+    public static final String BATCH_EVENTS = "scoring.batch.events";
+    public static final String BATCH_WAIT_MS = "scoring.batch.wait.ms";
     public static final String TOPIC_PARTITIONS = "topic.partitions";
     public static final String TOPIC_REPLICATION_FACTOR = "topic.replication.factor";
 
@@ -84,6 +86,13 @@ public final class AppConfig extends AbstractConfig {
             .define(POPULARITY_HALF_LIFE_HOURS, Type.DOUBLE, 720.0, Range.between(0.001, 1.0e6), Importance.LOW,
                     "Half-life, in hours of event time, of an event's weight in the group-popularity baseline"
                             + " (720 h = 30 days).")
+            .define(BATCH_EVENTS, Type.INT, 32, Range.between(1, 1024), Importance.LOW,
+                    "Usage events scored together, with one pass over the model's item factors for all of"
+                            + " them; each event still gets its own list. 1 publishes each list while its event"
+                            + " is processed.")
+            .define(BATCH_WAIT_MS, Type.LONG, 5L, Range.between(1L, 10_000L), Importance.LOW,
+                    "Longest wall-clock wait, in milliseconds, before a partly filled batch is scored and its"
+                            + " lists published; under exactly-once readers see them at the next commit.")
             .define(TOPIC_PARTITIONS, Type.INT, DEFAULT_PARTITIONS, Range.between(1, 1000), Importance.LOW,
                     "Partitions of each topic when Congener creates its topics.")
             .define(TOPIC_REPLICATION_FACTOR, Type.SHORT, (short) 1, Range.between(1, 7), Importance.LOW,
@@ -162,6 +171,14 @@ public final class AppConfig extends AbstractConfig {
 
     public java.time.Duration popularityHalfLife() {
         return java.time.Duration.ofMillis(Math.round(getDouble(POPULARITY_HALF_LIFE_HOURS) * 3_600_000.0));
+    }
+
+    public int batchEvents() {
+        return getInt(BATCH_EVENTS);
+    }
+
+    public long batchWaitMs() {
+        return getLong(BATCH_WAIT_MS);
     }
 
     public int topicPartitions() {

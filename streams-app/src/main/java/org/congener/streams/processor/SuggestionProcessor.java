@@ -8,6 +8,9 @@ import org.apache.kafka.common.serialization.Serializer;
 import org.apache.kafka.streams.processor.api.Processor;
 import org.apache.kafka.streams.processor.api.ProcessorContext;
 import org.apache.kafka.streams.processor.api.Record;
+import org.apache.kafka.streams.KeyValue;
+import org.apache.kafka.streams.processor.PunctuationType;
+import org.apache.kafka.streams.state.KeyValueIterator;
 import org.apache.kafka.streams.state.KeyValueStore;
 import org.congener.schemas.CatalogEntry;
 import org.congener.schemas.InventoryEvent;
@@ -48,11 +51,33 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
 
     private static final Logger LOG = LoggerFactory.getLogger(SuggestionProcessor.class);
 
-    /** Store and table names the processor reads. */
     /** Store names of the task's own stores and the instance's in-memory global tables. */
-    public record Stores(String interactions, String groupPopularity, String latestSuggestions,
+    public record Stores(String interactions, String groupPopularity, String latestSuggestions, String pendingLists,
                          InMemoryTable<Researcher> researchers, InMemoryTable<CatalogEntry> catalog,
                          InMemoryTable<InventoryEvent> stock) {
+    }
+
+    /**
+     * How events are gathered before their lists are scored and published: up to {@code events} at a
+     * time, and no batch waits longer than {@code longestWait} of wall-clock time. One event publishes each
+     * list while its event is processed.
+     */
+    public record Batching(int events, java.time.Duration longestWait) {
+        /** Each list published while its event is processed. */
+        public static final Batching NONE = new Batching(1, java.time.Duration.ofMillis(5));
+
+        public Batching {
+            if (events < 1) {
+                throw new IllegalArgumentException("a batch holds at least one event, not " + events);
+            }
+            if (longestWait.isNegative() || longestWait.isZero()) {
+                throw new IllegalArgumentException("batch wait must be positive, not " + longestWait);
+            }
+        }
+    }
+
+    /** An accepted event whose list is begun but not published yet. */
+    private record Waiting(SuggestionScorer.Begun scoring, Researcher researcher, String eventId, long timestamp) {
     }
 
     private final Stores stores;
@@ -67,11 +92,16 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
     static final int COLD_START_NEIGHBOURS = org.congener.core.ontology.neighbours.NeighbourCacheSettings.DEFAULT_K;
 
     private final Serializer<Suggestions> listWriter;
+    private final Batching batching;
+    private final List<Waiting> waiting = new ArrayList<>();
+    /** Set at start when the pending-lists store holds events a previous owner of the task had not published. */
+    private boolean recoveryDue;
     private final CatalogueSimilarity catalogueSimilarity;
     private ProcessorContext<String, byte[]> context;
     private KeyValueStore<String, InteractionProfile> interactions;
     private KeyValueStore<String, GroupPopularity> groups;
     private KeyValueStore<String, byte[]> latest;
+    private KeyValueStore<String, String> pendingLists;
     private InMemoryTable<Researcher> researchers;
     private InMemoryTable<CatalogEntry> catalog;
     private InMemoryTable<InventoryEvent> stock;
@@ -82,8 +112,9 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
      */
     public SuggestionProcessor(Stores stores, SuggestionScorer scorer, java.util.function.Supplier<LiveModel> liveModel,
                                InteractionWeights coldStartWeights, double halfLifeMs, int topN, boolean inStockOnly,
-                               SharedTerms sharedTerms, Serializer<Suggestions> listWriter) {
+                               SharedTerms sharedTerms, Serializer<Suggestions> listWriter, Batching batching) {
         this.listWriter = listWriter;
+        this.batching = batching;
         // one per processor (per task): the lists are built on the task's own thread, no sharing
         this.catalogueSimilarity = sharedTerms == null ? null
                 : new CatalogueSimilarity(sharedTerms.ontology(), sharedTerms.informationContent(), COLD_START_NEIGHBOURS);
@@ -103,6 +134,12 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         this.interactions = context.getStateStore(stores.interactions());
         this.groups = context.getStateStore(stores.groupPopularity());
         this.latest = context.getStateStore(stores.latestSuggestions());
+        this.pendingLists = context.getStateStore(stores.pendingLists());
+        try (KeyValueIterator<String, String> marks = pendingLists.all()) {
+            recoveryDue = marks.hasNext();
+        }
+        // the wait bounds a partly filled batch; the same punctuation publishes recovered events when no record comes
+        context.schedule(batching.longestWait(), PunctuationType.WALL_CLOCK_TIME, now -> publishWaiting(null));
         this.researchers = stores.researchers();
         this.catalog = stores.catalog();
         this.stock = stores.stock();
@@ -110,6 +147,9 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
 
     @Override
     public void process(Record<String, UsageEvent> record) {
+        if (recoveryDue) {
+            recover();
+        }
         UsageEvent event = record.value();
         Researcher researcher = researchers.get(event.researcherId());
         if (researcher == null) {
@@ -136,7 +176,23 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
             group.add(event.compoundId(), weight, at, halfLifeMs);
             groups.put(researcher.groupId(), group);
         }
+        Waiting waits = enqueue(researcher, profile, group, model, at, event.eventId(), record.timestamp());
+        if (waiting.size() >= batching.events()) {
+            publishWaiting(waits);
+        }
+    }
 
+    /**
+     * Begins the event's scoring (the fold-in, which the researcher's next event starts from), writes
+     * the profile, marks the researcher's list as pending and adds the event to the batch. A batch holds
+     * one model snapshot: an event under another one first publishes the batch, so no list mixes two
+     * versions.
+     */
+    private Waiting enqueue(Researcher researcher, InteractionProfile profile, GroupPopularity group, LiveModel model,
+                         long at, String eventId, long timestamp) {
+        if (!waiting.isEmpty() && waiting.get(0).scoring().input().model() != model) {
+            publishWaiting(null);
+        }
         CandidateFilter eligible = CandidateFilter.forResearcher(researcher, profile, catalog::get);
         if (inStockOnly) {
             eligible = eligible.and(this::inStock);
@@ -144,15 +200,114 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         SimilarCompounds similar = model == null && catalogueSimilarity != null
                 ? catalogueSimilarity.current(this::catalogueTerms, context.currentSystemTimeMs()) : null;
         ScoringInput input = new ScoringInput(researcher, profile, group, at, eligible, model, similar);
-        // the scorer keeps the folded vector in the profile, so the profile is written after scoring
-        List<ScoredCandidate> ranked = scorer.rank(input, topN);
-        interactions.put(event.researcherId(), profile);
-        Suggestions suggestions = new Suggestions(SchemaIds.SUGGESTIONS, researcher.researcherId(),
-                scorer.modelVersionFor(input), scorer.sourceFor(input), event.eventId(),
+        // the scorer keeps the folded vector in the profile, so the profile is written after begin
+        SuggestionScorer.Begun begun = scorer.begin(input);
+        interactions.put(researcher.researcherId(), profile);
+        pendingLists.put(researcher.researcherId(), PendingMark.of(eventId, at, timestamp));
+        Waiting event = new Waiting(begun, researcher, eventId, timestamp);
+        waiting.add(event);
+        return event;
+    }
+
+    /**
+     * Scores the waiting events together, publishes each one's list (to {@code suggestions} and the
+     * latest-list store) in event order, and clears their pending marks. Should the scorer fail on the
+     * batch, each event is scored alone; an event that fails alone gets no list. When that event is
+     * {@code current}, the record being processed, the failure is rethrown so the processing handler
+     * dead-letters it like any other; for an earlier event of the batch it is logged with the event's id.
+     */
+    private void publishWaiting(Waiting current) {
+        if (recoveryDue) {
+            recover();
+        }
+        if (waiting.isEmpty()) {
+            return;
+        }
+        RuntimeException currentFailure = null;
+        try {
+            List<List<ScoredCandidate>> lists = finishTogether();
+            for (int t = 0; t < waiting.size(); t++) {
+                Waiting w = waiting.get(t);
+                try {
+                    publish(w, lists != null ? lists.get(t) : scorer.finish(List.of(w.scoring()), topN).get(0));
+                } catch (RuntimeException e) {
+                    if (w == current) {
+                        currentFailure = e;
+                    } else {
+                        LOG.error("no list published for event {} of researcher {}", w.eventId(),
+                                w.researcher().researcherId(), e);
+                    }
+                }
+            }
+        } finally {
+            for (Waiting w : waiting) {
+                pendingLists.delete(w.researcher().researcherId());
+            }
+            waiting.clear();
+        }
+        if (currentFailure != null) {
+            throw currentFailure;
+        }
+    }
+
+    /** The lists of all waiting events from one call, or null when the scorer fails on the batch. */
+    private List<List<ScoredCandidate>> finishTogether() {
+        if (waiting.size() == 1) {
+            return null;
+        }
+        List<SuggestionScorer.Begun> begun = new ArrayList<>(waiting.size());
+        for (Waiting w : waiting) {
+            begun.add(w.scoring());
+        }
+        try {
+            return scorer.finish(begun, topN);
+        } catch (RuntimeException e) {
+            LOG.warn("scoring a batch of {} events failed; scoring each alone", begun.size(), e);
+            return null;
+        }
+    }
+
+    private void publish(Waiting w, List<ScoredCandidate> ranked) {
+        ScoringInput input = w.scoring().input();
+        Suggestions suggestions = new Suggestions(SchemaIds.SUGGESTIONS, w.researcher().researcherId(),
+                scorer.modelVersionFor(input), scorer.sourceFor(input), w.eventId(),
                 Instant.ofEpochMilli(context.currentSystemTimeMs()).toString(), items(ranked), SafetyCaution.TEXT);
         byte[] json = listWriter.serialize(null, suggestions);
-        latest.put(researcher.researcherId(), json);
-        context.forward(new Record<>(researcher.researcherId(), json, record.timestamp()));
+        latest.put(w.researcher().researcherId(), json);
+        context.forward(new Record<>(w.researcher().researcherId(), json, w.timestamp()));
+    }
+
+    /**
+     * Lists a previous owner of this task had begun but not published when its last commit was taken
+     * (a crash, or the task moving to another instance): each pending researcher gets one list for
+     * their state as stored, under the version live now, carrying the id of their latest event. The
+     * marks are in a changelogged store written in the same transaction as the profiles, so under
+     * exactly-once no accepted event is left without a list.
+     */
+    private void recover() {
+        recoveryDue = false;
+        List<KeyValue<String, String>> marks = new ArrayList<>();
+        try (KeyValueIterator<String, String> all = pendingLists.all()) {
+            all.forEachRemaining(marks::add);
+        }
+        LiveModel model = liveModel.get();
+        for (KeyValue<String, String> mark : marks) {
+            Researcher researcher = researchers.get(mark.key);
+            InteractionProfile profile = interactions.get(mark.key);
+            if (researcher == null || profile == null) {
+                LOG.warn("pending list of researcher {} dropped: researcher or profile gone", mark.key);
+                pendingLists.delete(mark.key);
+                continue;
+            }
+            PendingMark pending = PendingMark.parse(mark.value);
+            GroupPopularity group = model == null
+                    ? orNew(groups.get(researcher.groupId()), GroupPopularity::new) : null;
+            LOG.info("publishing the pending list of researcher {} (event {})", mark.key, pending.eventId());
+            enqueue(researcher, profile, group, model, pending.atEpochMs(), pending.eventId(), pending.timestamp());
+            if (waiting.size() >= batching.events()) {
+                publishWaiting(null);
+            }
+        }
     }
 
     private List<Suggestion> items(List<ScoredCandidate> ranked) {

@@ -5,6 +5,7 @@ import java.util.List;
 
 import org.congener.core.fusion.NeighbourLists;
 import org.congener.core.fusion.ResearcherScoring;
+import org.congener.core.fusion.ScoringBatch;
 import org.congener.core.fusion.ScoringWorkspace;
 import org.congener.schemas.Contribution;
 import org.congener.schemas.SuggestionSource;
@@ -26,8 +27,15 @@ public final class HybridScorer implements SuggestionScorer {
     static final int CONTRIBUTORS = 3;
 
     private final SuggestionScorer coldStart;
+    /**
+     * Events whose CF scores share one pass over the factors. 32 columns of 10,000 scores are 2.6 MB,
+     * about the factors' own size as floats; more would stream the scores through memory instead.
+     */
+    static final int BATCH_COLUMNS = 32;
     /** One workspace per stream thread (item-count doubles ×4), resized when a version of another size goes live. */
     private final ThreadLocal<ScoringWorkspace> workspaces = new ThreadLocal<>();
+    /** One batch per stream thread, kept like the workspace. */
+    private final ThreadLocal<ScoringBatch> batches = new ThreadLocal<>();
 
     public HybridScorer(SuggestionScorer coldStart) {
         this.coldStart = coldStart;
@@ -48,27 +56,98 @@ public final class HybridScorer implements SuggestionScorer {
         return input.model() == null ? null : input.model().version();
     }
 
+    /** Begun under a live version: the history in the version's index and the folded vector x_u. */
+    private record Folded(ScoringInput input, Row row, double[] x) implements Begun {
+    }
+
+    /**
+     * Folds in x_u and keeps it in the profile for the researcher's next event; before any version is
+     * live, the cold-start scorer's step.
+     */
     @Override
-    public List<ScoredCandidate> rank(ScoringInput input, int n) {
+    public Begun begin(ScoringInput input) {
         LiveModel model = input.model();
         if (model == null) {
-            return coldStart.rank(input, n);
+            return coldStart.begin(input);
         }
         Row row = Row.of(input.profile(), model, input.atEpochMs());
         ResearcherScoring scoring = model.scoring();
-        ScoringWorkspace ws = scoring.workspaceFor(workspaces.get());
-        workspaces.set(ws);
-        scoring.score(row.items, row.strengths, warmStart(input.profile().vectorUnder(model.version())), ws);
+        ScoringWorkspace ws = workspace(scoring);
+        scoring.foldIn(row.items, row.strengths, warmStart(input.profile().vectorUnder(model.version())), ws);
         double[] x = new double[scoring.rank()];
         ws.copyVector(x);
         input.profile().keepVector(model.version(), x);
-        int[] top = eligibleTop(ws, n, i -> input.eligible().eligible(model.compoundId(i)));
+        return new Folded(input, row, x);
+    }
+
+    @Override
+    public List<ScoredCandidate> rank(ScoringInput input, int n) {
+        return finish(List.of(begin(input)), n).get(0);
+    }
+
+    /**
+     * Runs of consecutive events under one version are scored together: their CF scores come from one
+     * pass over the version's factors ({@link ResearcherScoring#multiplyBatch}), each the same bits as
+     * alone, then each event is fused and filtered on its own.
+     */
+    @Override
+    public List<List<ScoredCandidate>> finish(List<? extends Begun> begun, int n) {
+        List<List<ScoredCandidate>> lists = new ArrayList<>(begun.size());
+        int start = 0;
+        while (start < begun.size()) {
+            if (!(begun.get(start) instanceof Folded first)) {
+                lists.add(coldStart.rank(begun.get(start).input(), n));
+                start++;
+                continue;
+            }
+            LiveModel model = first.input().model();
+            ResearcherScoring scoring = model.scoring();
+            ScoringWorkspace ws = workspace(scoring);
+            ScoringBatch batch = batch(scoring);
+            batch.clear();
+            int end = start;
+            while (end < begun.size() && !batch.isFull() && begun.get(end) instanceof Folded next
+                    && next.input().model() == model) {
+                batch.add(next.x());
+                end++;
+            }
+            scoring.multiplyBatch(batch, ws);
+            for (int t = start; t < end; t++) {
+                Folded event = (Folded) begun.get(t);
+                scoring.scoreColumn(batch, t - start, event.row().items, event.row().strengths, ws);
+                lists.add(ranked(event, ws, n));
+            }
+            start = end;
+        }
+        return lists;
+    }
+
+    private static List<ScoredCandidate> ranked(Folded event, ScoringWorkspace ws, int n) {
+        LiveModel model = event.input().model();
+        int[] top = eligibleTop(ws, n, i -> event.input().eligible().eligible(model.compoundId(i)));
         List<ScoredCandidate> ranked = new ArrayList<>(top.length);
         for (int i : top) {
             ranked.add(new ScoredCandidate(model.compoundId(i), ws.cf(i), ws.semantic(i), ws.fused(i),
-                    contributors(model, row, i)));
+                    contributors(model, event.row(), i)));
         }
         return ranked;
+    }
+
+    /** This thread's workspace, replaced when a version of another size goes live. */
+    private ScoringWorkspace workspace(ResearcherScoring scoring) {
+        ScoringWorkspace ws = scoring.workspaceFor(workspaces.get());
+        workspaces.set(ws);
+        return ws;
+    }
+
+    /** This thread's batch of {@link #BATCH_COLUMNS} columns, replaced when a version of another size goes live. */
+    private ScoringBatch batch(ResearcherScoring scoring) {
+        ScoringBatch batch = batches.get();
+        if (batch == null || !batch.fits(scoring.itemCount(), scoring.rank())) {
+            batch = scoring.newBatch(BATCH_COLUMNS);
+            batches.set(batch);
+        }
+        return batch;
     }
 
     /**
