@@ -23,6 +23,18 @@ public interface DenseKernels {
      */
     void multiply(double[] a, int aOff, int rows, int n, double[] x, int xOff, double[] out, int outOff);
 
+    /**
+     * out[outOff+t] += Σ_r s[sOff+r]·a[aOff+r·n+t] for t &lt; n, rows taken in order: the same as
+     * {@link #axpy}(s_r, row r, out) for r = 0, 1, …, so each entry equals that sequence of axpys bit
+     * for bit, with {@code out} read and written once instead of once per row. Modifies {@code out}.
+     */
+    default void accumulateRows(double[] a, int aOff, int rows, int n, double[] s, int sOff, double[] out,
+                                int outOff) {
+        for (int r = 0; r < rows; r++) {
+            axpy(s[sOff + r], a, aOff + r * n, out, outOff, n);
+        }
+    }
+
     /** Rows widened per block by {@link #multiply(float[], int, int, int, double[], int, double[], int, double[])}. */
     int WIDEN_BLOCK_ROWS = 32;
 

@@ -224,32 +224,37 @@ public final class FoldIn {
     private int conjugateGradient(int[] cols, double[] vals, int from, int to, double[] x, int xOff, int maxSteps,
                                   double stopBelow, boolean requirePositiveCurvature, Workspace ws) {
         int k = rank();
-        double[] y = fixed.factors().data();
-        double lambda = config.regularisation().effectiveLambda(config.lambda(), to - from);
+        int n = to - from;
+        double lambda = config.regularisation().effectiveLambda(config.lambda(), n);
         double[] r = ws.residual;
         double[] dir = ws.direction;
         double[] ad = ws.product;
+        // the researcher's rows y_i side by side, so each step's n_u dot products are one blocked
+        // product and its n_u updates one pass over ad (the same sums in the same order as row by row)
+        double[] rows = ws.gather(fixed.factors().data(), cols, from, to, k);
+        double[] along = ws.along;
+        double[] coef = ws.coefficients;
         // r = YᵀC_u p(u) − (YᵀC_uY + λI) x, with YᵀC_uY x = YᵀY x + Σ (c−1)(y·x) y
         multiplyGram(x, xOff, r, lambda);
         for (int f = 0; f < k; f++) {
             r[f] = -r[f];
         }
-        for (int p = from; p < to; p++) {
-            int off = cols[p] * k;
-            double c = config.confidenceOf(vals[p]);
-            double yx = kernels.dot(y, off, x, xOff, k);
-            kernels.axpy(c - (c - 1.0) * yx, y, off, r, 0, k);
+        kernels.multiply(rows, 0, n, k, x, xOff, along, 0);
+        for (int p = 0; p < n; p++) {
+            double c = config.confidenceOf(vals[from + p]);
+            coef[p] = c - (c - 1.0) * along[p];
         }
+        kernels.accumulateRows(rows, 0, n, k, coef, 0, r, 0);
         System.arraycopy(r, 0, dir, 0, k);
         double rr = kernels.dot(r, 0, r, 0, k);
         int s = 0;
         for (; s < maxSteps && rr > stopBelow; s++) {
             multiplyGram(dir, 0, ad, lambda);
-            for (int p = from; p < to; p++) {
-                int off = cols[p] * k;
-                double w = config.confidenceOf(vals[p]) - 1.0;
-                kernels.axpy(w * kernels.dot(y, off, dir, 0, k), y, off, ad, 0, k);
+            kernels.multiply(rows, 0, n, k, dir, 0, along, 0);
+            for (int p = 0; p < n; p++) {
+                coef[p] = (config.confidenceOf(vals[from + p]) - 1.0) * along[p];
             }
+            kernels.accumulateRows(rows, 0, n, k, coef, 0, ad, 0);
             double curvature = kernels.dot(dir, 0, ad, 0, k);
             if (requirePositiveCurvature && !(curvature > 0)) {
                 throw new NotPositiveDefiniteException("fold-in system has d·Ad = " + curvature + " (λ = " + lambda + ")");
@@ -268,12 +273,12 @@ public final class FoldIn {
         return s;
     }
 
-    /** out = (YᵀY + λI) v, with v read from {@code v[vOff..vOff+k)}. */
+    /** out = (YᵀY + λI) v, with v read from {@code v[vOff..vOff+k)}; each row of YᵀY·v as {@link DenseKernels#dot} sums it. */
     private void multiplyGram(double[] v, int vOff, double[] out, double lambda) {
         int k = rank();
-        double[] gram = fixed.gram();
+        kernels.multiply(fixed.gram(), 0, k, k, v, vOff, out, 0);
         for (int f = 0; f < k; f++) {
-            out[f] = kernels.dot(gram, f * k, v, vOff, k) + lambda * v[vOff + f];
+            out[f] += lambda * v[vOff + f];
         }
     }
 
@@ -287,6 +292,11 @@ public final class FoldIn {
         final double[] direction;
         final double[] product;
         double lastResidualSquared;
+        /** The rows y_i of the items being solved for, side by side; grown to the longest history seen. */
+        double[] rows = new double[0];
+        /** Per item: y_i·v for the current v, and the weight of y_i in the update. */
+        double[] along = new double[0];
+        double[] coefficients = new double[0];
 
         public Workspace(int k) {
             system = new DMatrixRMaj(k, k);
@@ -300,6 +310,21 @@ public final class FoldIn {
 
         public int rank() {
             return residual.length;
+        }
+
+        /** Copies the rows of {@code cols[from..to)} from {@code y} into {@link #rows} and returns it. */
+        double[] gather(double[] y, int[] cols, int from, int to, int k) {
+            int n = to - from;
+            if (along.length < n) {
+                int capacity = Math.max(n, 2 * along.length);
+                rows = new double[capacity * k];
+                along = new double[capacity];
+                coefficients = new double[capacity];
+            }
+            for (int p = 0; p < n; p++) {
+                System.arraycopy(y, cols[from + p] * k, rows, p * k, k);
+            }
+            return rows;
         }
     }
 }

@@ -50,6 +50,33 @@ final class VectorKernels implements DenseKernels {
     }
 
     /**
+     * One lane block of {@code out} at a time, held in a register while every row adds its share: the
+     * per-entry operations and their order are axpy's (a fused multiply-add per row on the lanes, a
+     * plain multiply and add on the tail), so the result is the same bits.
+     */
+    @Override
+    public void accumulateRows(double[] a, int aOff, int rows, int n, double[] s, int sOff, double[] out,
+                               int outOff) {
+        int lanes = SPECIES.length();
+        int t = 0;
+        for (; t + lanes <= n; t += lanes) {
+            DoubleVector acc = DoubleVector.fromArray(SPECIES, out, outOff + t);
+            for (int r = 0; r < rows; r++) {
+                DoubleVector row = DoubleVector.fromArray(SPECIES, a, aOff + r * n + t);
+                acc = row.fma(DoubleVector.broadcast(SPECIES, s[sOff + r]), acc);
+            }
+            acc.intoArray(out, outOff + t);
+        }
+        for (; t < n; t++) {
+            double sum = out[outOff + t];
+            for (int r = 0; r < rows; r++) {
+                sum += s[sOff + r] * a[aOff + r * n + t];
+            }
+            out[outOff + t] = sum;
+        }
+    }
+
+    /**
      * Four rows per pass: x is loaded once per lane block for the four, and the four accumulator chains
      * are independent, so the fused multiply-adds of one row do not wait on each other's latency.
      */
@@ -105,45 +132,138 @@ final class VectorKernels implements DenseKernels {
     @Override
     public void multiply(float[] a, int aOff, int rows, int n, double[] x, int xOff, double[] out, int outOff,
                          double[] scratch) {
-        int lanes = SPECIES.length();
-        int body = n - n % lanes;
         int r = 0;
         for (; r + 4 <= rows; r += 4) {
-            int o0 = aOff + r * n;
-            int o1 = o0 + n;
-            int o2 = o1 + n;
-            int o3 = o2 + n;
-            DoubleVector acc0 = DoubleVector.zero(SPECIES);
-            DoubleVector acc1 = acc0;
-            DoubleVector acc2 = acc0;
-            DoubleVector acc3 = acc0;
-            for (int t = 0; t < body; t += lanes) {
-                DoubleVector vx = DoubleVector.fromArray(SPECIES, x, xOff + t);
-                acc0 = widened(a, o0 + t).fma(vx, acc0);
-                acc1 = widened(a, o1 + t).fma(vx, acc1);
-                acc2 = widened(a, o2 + t).fma(vx, acc2);
-                acc3 = widened(a, o3 + t).fma(vx, acc3);
-            }
-            double s0 = acc0.reduceLanes(VectorOperators.ADD);
-            double s1 = acc1.reduceLanes(VectorOperators.ADD);
-            double s2 = acc2.reduceLanes(VectorOperators.ADD);
-            double s3 = acc3.reduceLanes(VectorOperators.ADD);
-            for (int t = body; t < n; t++) {
-                double xt = x[xOff + t];
-                s0 += (double) a[o0 + t] * xt;
-                s1 += (double) a[o1 + t] * xt;
-                s2 += (double) a[o2 + t] * xt;
-                s3 += (double) a[o3 + t] * xt;
-            }
-            out[outOff + r] = s0;
-            out[outOff + r + 1] = s1;
-            out[outOff + r + 2] = s2;
-            out[outOff + r + 3] = s3;
+            fourRows(a, aOff + r * n, n, x, xOff, out, outOff + r);
         }
         if (r < rows) {
             // the last rows through the scratch path, which ends in dot's order like the double product
             DenseKernels.super.multiply(a, aOff + r * n, rows - r, n, x, xOff, out, outOff + r, scratch);
         }
+    }
+
+    /**
+     * Several vectors against one float block, widened in registers: four rows at a time, each row
+     * block loaded and widened once for two vectors. Every (row, vector) pair is summed exactly as
+     * {@link #multiply(float[], int, int, int, double[], int, double[], int, double[])} sums it, so each
+     * out_c is that product bit for bit.
+     */
+    @Override
+    public void multiplyMany(float[] a, int aOff, int rows, int n, double[][] xs, int count, double[][] outs,
+                             int outOff, double[] scratch) {
+        int r = 0;
+        for (; r + 4 <= rows; r += 4) {
+            int rowsAt = aOff + r * n;
+            int c = 0;
+            for (; c + 2 <= count; c += 2) {
+                fourRowsTwoVectors(a, rowsAt, n, xs[c], xs[c + 1], outs[c], outs[c + 1], outOff + r);
+            }
+            if (c < count) {
+                fourRows(a, rowsAt, n, xs[c], 0, outs[c], outOff + r);
+            }
+        }
+        if (r < rows) {
+            for (int c = 0; c < count; c++) {
+                DenseKernels.super.multiply(a, aOff + r * n, rows - r, n, xs[c], 0, outs[c], outOff + r, scratch);
+            }
+        }
+    }
+
+    /** out[at..at+4) = the four float rows from {@code o0} times x: the body of the float product. */
+    private static void fourRows(float[] a, int o0, int n, double[] x, int xOff, double[] out, int at) {
+        int lanes = SPECIES.length();
+        int body = n - n % lanes;
+        int o1 = o0 + n;
+        int o2 = o1 + n;
+        int o3 = o2 + n;
+        DoubleVector acc0 = DoubleVector.zero(SPECIES);
+        DoubleVector acc1 = acc0;
+        DoubleVector acc2 = acc0;
+        DoubleVector acc3 = acc0;
+        for (int t = 0; t < body; t += lanes) {
+            DoubleVector vx = DoubleVector.fromArray(SPECIES, x, xOff + t);
+            acc0 = widened(a, o0 + t).fma(vx, acc0);
+            acc1 = widened(a, o1 + t).fma(vx, acc1);
+            acc2 = widened(a, o2 + t).fma(vx, acc2);
+            acc3 = widened(a, o3 + t).fma(vx, acc3);
+        }
+        double s0 = acc0.reduceLanes(VectorOperators.ADD);
+        double s1 = acc1.reduceLanes(VectorOperators.ADD);
+        double s2 = acc2.reduceLanes(VectorOperators.ADD);
+        double s3 = acc3.reduceLanes(VectorOperators.ADD);
+        for (int t = body; t < n; t++) {
+            double xt = x[xOff + t];
+            s0 += (double) a[o0 + t] * xt;
+            s1 += (double) a[o1 + t] * xt;
+            s2 += (double) a[o2 + t] * xt;
+            s3 += (double) a[o3 + t] * xt;
+        }
+        out[at] = s0;
+        out[at + 1] = s1;
+        out[at + 2] = s2;
+        out[at + 3] = s3;
+    }
+
+    /** {@link #fourRows} for two vectors at once, sharing each widened row block. */
+    private static void fourRowsTwoVectors(float[] a, int o0, int n, double[] x, double[] z, double[] outX,
+                                           double[] outZ, int at) {
+        int lanes = SPECIES.length();
+        int body = n - n % lanes;
+        int o1 = o0 + n;
+        int o2 = o1 + n;
+        int o3 = o2 + n;
+        DoubleVector x0 = DoubleVector.zero(SPECIES);
+        DoubleVector x1 = x0;
+        DoubleVector x2 = x0;
+        DoubleVector x3 = x0;
+        DoubleVector z0 = x0;
+        DoubleVector z1 = x0;
+        DoubleVector z2 = x0;
+        DoubleVector z3 = x0;
+        for (int t = 0; t < body; t += lanes) {
+            DoubleVector vx = DoubleVector.fromArray(SPECIES, x, t);
+            DoubleVector vz = DoubleVector.fromArray(SPECIES, z, t);
+            DoubleVector w0 = widened(a, o0 + t);
+            DoubleVector w1 = widened(a, o1 + t);
+            DoubleVector w2 = widened(a, o2 + t);
+            DoubleVector w3 = widened(a, o3 + t);
+            x0 = w0.fma(vx, x0);
+            x1 = w1.fma(vx, x1);
+            x2 = w2.fma(vx, x2);
+            x3 = w3.fma(vx, x3);
+            z0 = w0.fma(vz, z0);
+            z1 = w1.fma(vz, z1);
+            z2 = w2.fma(vz, z2);
+            z3 = w3.fma(vz, z3);
+        }
+        double sx0 = x0.reduceLanes(VectorOperators.ADD);
+        double sx1 = x1.reduceLanes(VectorOperators.ADD);
+        double sx2 = x2.reduceLanes(VectorOperators.ADD);
+        double sx3 = x3.reduceLanes(VectorOperators.ADD);
+        double sz0 = z0.reduceLanes(VectorOperators.ADD);
+        double sz1 = z1.reduceLanes(VectorOperators.ADD);
+        double sz2 = z2.reduceLanes(VectorOperators.ADD);
+        double sz3 = z3.reduceLanes(VectorOperators.ADD);
+        for (int t = body; t < n; t++) {
+            double xt = x[t];
+            double zt = z[t];
+            sx0 += (double) a[o0 + t] * xt;
+            sx1 += (double) a[o1 + t] * xt;
+            sx2 += (double) a[o2 + t] * xt;
+            sx3 += (double) a[o3 + t] * xt;
+            sz0 += (double) a[o0 + t] * zt;
+            sz1 += (double) a[o1 + t] * zt;
+            sz2 += (double) a[o2 + t] * zt;
+            sz3 += (double) a[o3 + t] * zt;
+        }
+        outX[at] = sx0;
+        outX[at + 1] = sx1;
+        outX[at + 2] = sx2;
+        outX[at + 3] = sx3;
+        outZ[at] = sz0;
+        outZ[at + 1] = sz1;
+        outZ[at + 2] = sz2;
+        outZ[at + 3] = sz3;
     }
 
     @Override
@@ -157,8 +277,13 @@ final class VectorKernels implements DenseKernels {
             lo = lo.lanewise(VectorOperators.MIN, block);
             hi = hi.lanewise(VectorOperators.MAX, block);
         }
-        double least = lo.reduceLanes(VectorOperators.MIN);
-        double greatest = hi.reduceLanes(VectorOperators.MAX);
+        // lane by lane rather than by a MIN / MAX reduction, which this JDK may not compile to vector code
+        double least = Double.POSITIVE_INFINITY;
+        double greatest = Double.NEGATIVE_INFINITY;
+        for (int lane = 0; lane < lanes; lane++) {
+            least = Math.min(least, lo.lane(lane));
+            greatest = Math.max(greatest, hi.lane(lane));
+        }
         for (; t < to; t++) {
             least = Math.min(least, v[t]);
             greatest = Math.max(greatest, v[t]);

@@ -14,16 +14,18 @@ import org.congener.core.factorisation.DenseKernels;
  *       learning methods", SIGIR)</li>
  *   <li>CF_ONLY, SEMANTIC_ONLY: one side alone</li>
  * </ul>
- * Training items count as −∞ on both sides and get −∞, so they never enter a list. The inputs are
- * read, never modified; normalised values are formed where they are used, so no copy of either side
- * is made. One instance serves one thread: it keeps the rank order's arrays, made on first use.
+ * Training items count as −∞ on both sides and get −∞, so they never enter a list. The inputs end
+ * as they began (the range pass lends training items' entries for a moment and puts them back);
+ * normalised values are formed where they are used, so no copy of either side is made. One instance serves one thread: it keeps the rank order's arrays, made on first use.
  */
 final class ScoreFusion {
     private static final DenseKernels KERNELS = DenseKernels.best();
 
     private final int itemCount;
-    /** Least and greatest of one run of candidates, from the kernel. */
+    /** Least and greatest from the kernel. */
     private final double[] runRange = new double[2];
+    /** Training items' scores while candidates' stand in for them in {@link #range}. */
+    private double[] saved = new double[16];
     private RankOrder rankOrder;
     /** 1/(k + r) for ranks r = 1..n at {@link #reciprocalK}: the same quotients, divided once per k. */
     private double[] reciprocalRank;
@@ -119,25 +121,35 @@ final class ScoreFusion {
 
     /**
      * Lowest finite score and span (highest − lowest) over the candidates, i.e. skipping the sorted
-     * training items; into {@link #lowest}, {@link #span} and {@link #plainScale}. The runs of
-     * candidates between training items go through the vector kernel's min and max; when both come out
-     * finite every candidate was finite, and Math.min and Math.max give the same answer in any order, so
-     * this is the scalar loop's result. Otherwise (a NaN or an infinity among the candidates, or none)
-     * the scalar loop decides.
+     * training items; into {@link #lowest}, {@link #span} and {@link #plainScale}. One pass of the
+     * vector kernel's min and max over the whole array, with each training item's score stood in for
+     * by a candidate's while it runs (a repeated candidate value moves neither end) and put back
+     * after, so the caller sees its array unchanged. When both ends come out finite every candidate was
+     * finite, and Math.min and Math.max give the same answer in any order, so this is the scalar loop's
+     * result; otherwise (a NaN or an infinity among the candidates, or no candidate) the scalar loop
+     * decides.
      */
     private void range(double[] v, int[] training, int from, int to) {
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
-        int start = 0;
-        for (int p = from; p <= to; p++) {
-            int end = p < to ? training[p] : itemCount;
-            if (end > start) {
-                KERNELS.minMax(v, start, end, runRange);
-                lo = Math.min(lo, runRange[0]);
-                hi = Math.max(hi, runRange[1]);
-            }
-            start = Math.max(start, end + 1);
+        int stand = firstCandidate(training, from, to);
+        if (stand < 0) {
+            scalarRange(v, training, from, to);
+            return;
         }
+        if (saved.length < to - from) {
+            saved = new double[Math.max(to - from, 2 * saved.length)];
+        }
+        double standIn = v[stand];
+        for (int p = from; p < to; p++) {
+            saved[p - from] = v[training[p]];
+            v[training[p]] = standIn;
+        }
+        KERNELS.minMax(v, 0, itemCount, runRange);
+        // backwards, so a repeated training item gets its first saved value, the original, last
+        for (int p = to - 1; p >= from; p--) {
+            v[training[p]] = saved[p - from];
+        }
+        double lo = runRange[0];
+        double hi = runRange[1];
         if (Double.isFinite(lo) && Double.isFinite(hi)) {
             lowest = lo;
             span = hi - lo;
@@ -145,6 +157,17 @@ final class ScoreFusion {
             return;
         }
         scalarRange(v, training, from, to);
+    }
+
+    /** The smallest item that is not a training item, or −1 when every item is one. */
+    private int firstCandidate(int[] training, int from, int to) {
+        int item = 0;
+        for (int p = from; p < to && training[p] <= item; p++) {
+            if (training[p] == item) {
+                item++;
+            }
+        }
+        return item < itemCount ? item : -1;
     }
 
     /** {@link #range} one item at a time, skipping non-finite scores. */

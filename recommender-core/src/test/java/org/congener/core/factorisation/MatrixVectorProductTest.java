@@ -27,6 +27,33 @@ class MatrixVectorProductTest {
     }
 
     @Test
+    void shouldEqualOneAxpyPerRowBitForBitWhenRowsAreAccumulatedInOnePass() {
+        SplittableRandom random = new SplittableRandom(9);
+        for (DenseKernels kernels : new DenseKernels[] {DenseKernels.best(), DenseKernels.scalar()}) {
+            for (int n : RANKS) {
+                for (int rows : ROWS) {
+                    double[] a = new double[2 + rows * n];
+                    double[] s = new double[1 + rows];
+                    double[] start = new double[n + 3];
+                    a = random.doubles(a.length, -2, 2).toArray();
+                    s = random.doubles(s.length, -3, 3).toArray();
+                    start = random.doubles(start.length, -1, 1).toArray();
+                    double[] expected = start.clone();
+                    for (int r = 0; r < rows; r++) {
+                        kernels.axpy(s[1 + r], a, 2 + r * n, expected, 3, n);
+                    }
+                    double[] actual = start.clone();
+                    kernels.accumulateRows(a, 2, rows, n, s, 1, actual, 3);
+                    for (int t = 0; t < expected.length; t++) {
+                        assertEquals(Double.doubleToLongBits(expected[t]), Double.doubleToLongBits(actual[t]),
+                                kernels + ", rank " + n + ", rows " + rows + ", entry " + t);
+                    }
+                }
+            }
+        }
+    }
+
+    @Test
     void shouldMatchANaiveLoopAndTheScalarKernelWhenRowsAndRankVary() {
         SplittableRandom random = new SplittableRandom(5);
         for (int n : RANKS) {

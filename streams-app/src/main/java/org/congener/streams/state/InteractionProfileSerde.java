@@ -1,11 +1,6 @@
 package org.congener.streams.state;
 
-import java.io.ByteArrayInputStream;
-import java.io.ByteArrayOutputStream;
-import java.io.DataInputStream;
-import java.io.DataOutputStream;
-import java.io.IOException;
-import java.io.UncheckedIOException;
+import java.nio.ByteBuffer;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
@@ -19,6 +14,8 @@ import org.apache.kafka.common.serialization.Serializer;
  * and a flags byte (bit 0: used) — about 20 bytes per compound plus the id; then (format 2) the
  * vector's rank (short, 0 for none) and, when there is one, its version (modified UTF-8) and the
  * factors as floats. Format 1, without the vector, is still read, so stores written before it load.
+ * The layout is that of {@link java.io.DataOutputStream}; it is read and written on a byte buffer
+ * (a profile is read and written at every event, and the stream classes lock per byte).
  */
 public final class InteractionProfileSerde implements Serde<InteractionProfile> {
 
@@ -36,62 +33,66 @@ public final class InteractionProfileSerde implements Serde<InteractionProfile> 
     }
 
     static byte[] write(InteractionProfile profile) {
-        ByteArrayOutputStream buffer = new ByteArrayOutputStream(16 + profile.size() * 32 + 4 * 64 + 16);
-        try (DataOutputStream out = new DataOutputStream(buffer)) {
-            out.writeByte(FORMAT);
-            out.writeInt(profile.size());
-            for (InteractionProfile.Entry e : profile.entries()) {
-                out.writeUTF(e.compoundId());
-                out.writeFloat(e.strength());
-                out.writeInt(e.events());
-                out.writeLong(e.lastSeenEpochMs());
-                out.writeByte(e.used() ? 1 : 0);
-            }
-            String version = profile.vectorVersion();
-            float[] vector = profile.vectorUnder(version);
-            if (vector == null) {
-                out.writeShort(0);
-            } else {
-                out.writeShort(vector.length);
-                out.writeUTF(version);
-                for (float v : vector) {
-                    out.writeFloat(v);
-                }
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+        String version = profile.vectorVersion();
+        float[] vector = profile.vectorUnder(version);
+        int size = 1 + 4 + 2;
+        for (InteractionProfile.Entry e : profile.entries()) {
+            size += ModifiedUtf8.length(e.compoundId()) + 4 + 4 + 8 + 1;
         }
-        return buffer.toByteArray();
+        if (vector != null) {
+            size += ModifiedUtf8.length(version) + 4 * vector.length;
+        }
+        ByteBuffer out = ByteBuffer.allocate(size);
+        out.put(FORMAT);
+        out.putInt(profile.size());
+        for (InteractionProfile.Entry e : profile.entries()) {
+            ModifiedUtf8.put(out, e.compoundId());
+            out.putFloat(e.strength());
+            out.putInt(e.events());
+            out.putLong(e.lastSeenEpochMs());
+            out.put((byte) (e.used() ? 1 : 0));
+        }
+        if (vector == null) {
+            out.putShort((short) 0);
+        } else {
+            out.putShort((short) vector.length);
+            ModifiedUtf8.put(out, version);
+            for (float v : vector) {
+                out.putFloat(v);
+            }
+        }
+        return out.array();
     }
 
     static InteractionProfile read(byte[] bytes) {
-        try (DataInputStream in = new DataInputStream(new ByteArrayInputStream(bytes))) {
-            byte format = in.readByte();
+        try {
+            ByteBuffer in = ByteBuffer.wrap(bytes);
+            byte format = in.get();
             if (format != FORMAT && format != FORMAT_WITHOUT_VECTOR) {
                 throw new IllegalStateException("unknown interaction profile format " + format);
             }
-            int count = in.readInt();
+            int count = in.getInt();
             Map<String, InteractionProfile.Entry> entries = new LinkedHashMap<>(Math.max(4, count * 2));
             for (int i = 0; i < count; i++) {
-                String id = in.readUTF();
-                entries.put(id, new InteractionProfile.Entry(id, in.readFloat(), in.readInt(), in.readLong(),
-                        (in.readByte() & 1) != 0));
+                String id = ModifiedUtf8.get(in);
+                entries.put(id, new InteractionProfile.Entry(id, in.getFloat(), in.getInt(), in.getLong(),
+                        (in.get() & 1) != 0));
             }
             if (format == FORMAT_WITHOUT_VECTOR) {
                 return new InteractionProfile(entries, null, null);
             }
-            int rank = in.readUnsignedShort();
+            int rank = in.getShort() & 0xFFFF;
             if (rank == 0) {
                 return new InteractionProfile(entries, null, null);
             }
-            String version = in.readUTF();
+            String version = ModifiedUtf8.get(in);
             float[] vector = new float[rank];
             for (int f = 0; f < rank; f++) {
-                vector[f] = in.readFloat();
+                vector[f] = in.getFloat();
             }
             return new InteractionProfile(entries, version, vector);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+        } catch (java.nio.BufferUnderflowException e) {
+            throw new IllegalStateException("interaction profile of " + bytes.length + " bytes is cut short", e);
         }
     }
 }
