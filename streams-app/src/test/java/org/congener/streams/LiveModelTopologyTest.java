@@ -38,6 +38,7 @@ import org.congener.streams.model.ModelAssembler;
 import org.congener.streams.state.InteractionProfile;
 import org.congener.streams.processor.DeadLetteringDeserializationHandler;
 import org.congener.streams.processor.DeadLetteringProcessingHandler;
+import org.congener.streams.processor.SuggestionProcessor;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -87,12 +88,18 @@ class LiveModelTopologyTest {
     }
 
     private void start(boolean inStockOnly, org.congener.streams.model.SharedTerms sharedTerms) {
+        start(inStockOnly, sharedTerms, SuggestionProcessor.Batching.NONE);
+    }
+
+    private void start(boolean inStockOnly, org.congener.streams.model.SharedTerms sharedTerms,
+                       SuggestionProcessor.Batching batching) {
         if (driver != null) {
             driver.close();
         }
+        sequence = 0;
         StreamsBuilder builder = new StreamsBuilder();
         models = SuggestionTopology.build(builder,
-                new SuggestionTopology.Settings("lab.", 4, Duration.ofDays(30), inStockOnly), sharedTerms);
+                new SuggestionTopology.Settings("lab.", 4, Duration.ofDays(30), inStockOnly, batching), sharedTerms);
         Properties props = new Properties();
         props.put(StreamsConfig.APPLICATION_ID_CONFIG, "live-model-test");
         props.put(StreamsConfig.BOOTSTRAP_SERVERS_CONFIG, "unused:9092");
@@ -138,11 +145,85 @@ class LiveModelTopologyTest {
     }
 
     private Suggestions send(String researcher, String compound, UsageKind kind) {
+        pipe(researcher, compound, kind);
+        List<Suggestions> out = suggestions.readValuesToList();
+        return out.get(out.size() - 1);
+    }
+
+    /** One usage event in, its list not read (with batching it may not be out yet). */
+    private void pipe(String researcher, String compound, UsageKind kind) {
         UsageEvent event = Fixtures.event("e" + (++sequence), researcher, compound, kind,
                 "2026-01-02T10:00:" + String.format("%02d", sequence % 60) + "Z");
         usage.pipeInput(researcher, Fixtures.json(event));
-        List<Suggestions> out = suggestions.readValuesToList();
-        return out.get(out.size() - 1);
+    }
+
+    /** The lists out so far, without the time each was made (which differs from run to run). */
+    private List<Suggestions> listsOut() {
+        return suggestions.readValuesToList().stream()
+                .map(l -> new Suggestions(l.schema(), l.researcherId(), l.modelVersion(), l.source(),
+                        l.causedByEventId(), "", l.items(), l.caution()))
+                .toList();
+    }
+
+    /** Events of four researchers, two of them twice, under one version. */
+    private static final List<List<String>> MIXED_EVENTS = List.of(
+            List.of("ada", "c-ethanol", "ORDER"), List.of("ben", "c-acetone", "ORDER"),
+            List.of("ada", "c-toluene", "VIEW"), List.of("cyd", "c-ethanol", "ORDER"),
+            List.of("ben", "c-ethanol", "WITHDRAWAL"), List.of("dee", "c-acetone", "ORDER"));
+
+    @Test
+    void shouldPublishEachEventsOwnListInOrderAndTheSameListsWhenEventsAreScoredInBatches() {
+        publish(version("v0001", FusionSettings.blend(0.5), 1));
+        for (List<String> e : MIXED_EVENTS) {
+            pipe(e.get(0), e.get(1), UsageKind.valueOf(e.get(2)));
+        }
+        List<Suggestions> oneByOne = listsOut();
+        assertEquals(MIXED_EVENTS.size(), oneByOne.size(), "without batching every event's list is out at once");
+
+        start(false, null, new SuggestionProcessor.Batching(4, Duration.ofHours(1)));
+        publish(version("v0001", FusionSettings.blend(0.5), 1));
+        for (int t = 0; t < 3; t++) {
+            List<String> e = MIXED_EVENTS.get(t);
+            pipe(e.get(0), e.get(1), UsageKind.valueOf(e.get(2)));
+        }
+        assertTrue(suggestions.isEmpty(), "three events wait for a fourth or for the wait to pass");
+        List<String> fourth = MIXED_EVENTS.get(3);
+        pipe(fourth.get(0), fourth.get(1), UsageKind.valueOf(fourth.get(2)));
+        List<Suggestions> batched = new ArrayList<>(listsOut());
+        assertEquals(List.of("e1", "e2", "e3", "e4"), batched.stream().map(Suggestions::causedByEventId).toList(),
+                "a full batch publishes every event's list, in event order");
+        for (int t = 4; t < MIXED_EVENTS.size(); t++) {
+            List<String> e = MIXED_EVENTS.get(t);
+            pipe(e.get(0), e.get(1), UsageKind.valueOf(e.get(2)));
+        }
+        assertTrue(suggestions.isEmpty());
+        driver.advanceWallClockTime(Duration.ofHours(1));
+        batched.addAll(listsOut());
+        // the same scores to the bit: each event folded in as it came, CF scores from the shared pass
+        assertEquals(oneByOne, batched);
+        try (var pending = driver.<String, String>getKeyValueStore(SuggestionTopology.PENDING_LISTS_STORE).all()) {
+            assertFalse(pending.hasNext(), "no list left pending");
+        }
+    }
+
+    @Test
+    void shouldPublishAWaitingBatchUnderItsOwnVersionWhenTheNextEventComesUnderANewOne() {
+        start(false, null, new SuggestionProcessor.Batching(8, Duration.ofHours(1)));
+        publish(version("v0001", FusionSettings.blend(0.5), 1));
+        pipe("ada", "c-ethanol", UsageKind.ORDER);
+        pipe("ben", "c-acetone", UsageKind.ORDER);
+        publish(version("v0002", FusionSettings.product(), 2));
+        assertTrue(suggestions.isEmpty(), "a new version alone publishes nothing");
+
+        pipe("cyd", "c-ethanol", UsageKind.ORDER);
+        List<Suggestions> first = listsOut();
+        assertEquals(List.of("e1", "e2"), first.stream().map(Suggestions::causedByEventId).toList());
+        assertEquals(List.of("v0001", "v0001"), first.stream().map(Suggestions::modelVersion).toList(),
+                "the waiting events keep the version they were folded in under");
+        driver.advanceWallClockTime(Duration.ofHours(1));
+        Suggestions third = listsOut().get(0);
+        assertEquals("e3", third.causedByEventId());
+        assertEquals("v0002", third.modelVersion());
     }
 
     private static List<String> ids(Suggestions s) {
