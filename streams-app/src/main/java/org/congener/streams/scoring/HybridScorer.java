@@ -36,6 +36,8 @@ public final class HybridScorer implements SuggestionScorer {
     private final ThreadLocal<ScoringWorkspace> workspaces = new ThreadLocal<>();
     /** One batch per stream thread, kept like the workspace. */
     private final ThreadLocal<ScoringBatch> batches = new ThreadLocal<>();
+    /** Per stream thread: item → 1 + its place in the list being explained, 0 elsewhere. */
+    private final ThreadLocal<int[]> slotArrays = new ThreadLocal<>();
 
     public HybridScorer(SuggestionScorer coldStart) {
         this.coldStart = coldStart;
@@ -122,13 +124,15 @@ public final class HybridScorer implements SuggestionScorer {
         return lists;
     }
 
-    private static List<ScoredCandidate> ranked(Folded event, ScoringWorkspace ws, int n) {
+    private List<ScoredCandidate> ranked(Folded event, ScoringWorkspace ws, int n) {
         LiveModel model = event.input().model();
         int[] top = eligibleTop(ws, n, i -> event.input().eligible().eligible(model.compoundId(i)));
+        List<List<Contribution>> reasons = contributors(model.neighbours(), model::compoundId, event.row().items, top,
+                candidateSlots(model.itemCount()));
         List<ScoredCandidate> ranked = new ArrayList<>(top.length);
-        for (int i : top) {
-            ranked.add(new ScoredCandidate(model.compoundId(i), ws.cf(i), ws.semantic(i), ws.fused(i),
-                    contributors(model, event.row(), i)));
+        for (int t = 0; t < top.length; t++) {
+            int i = top[t];
+            ranked.add(new ScoredCandidate(model.compoundId(i), ws.cf(i), ws.semantic(i), ws.fused(i), reasons.get(t)));
         }
         return ranked;
     }
@@ -185,33 +189,76 @@ public final class HybridScorer implements SuggestionScorer {
     }
 
     /**
-     * The researcher's past compounds j with the largest share sim(j, i) / n_u of the candidate's mean
-     * semantic score, most first; compounds with no share are left out.
+     * For each listed candidate i, the researcher's past compounds j with the largest share
+     * sim(j, i) / n_u of its mean semantic score, most first, ties to the earlier compound of the
+     * history; compounds with no share are left out. One pass over the history's neighbour lists
+     * serves every candidate (n_u·K steps instead of a look-up per candidate and past compound); sim(j, i)
+     * is the first entry for i in j's list, as {@link NeighbourLists#similarity} reads it.
+     *
+     * @param slotOf all zero, one entry per item; zero again on return
      */
-    private static List<Contribution> contributors(LiveModel model, Row row, int candidate) {
-        NeighbourLists lists = model.neighbours();
-        int[] best = new int[CONTRIBUTORS];
-        double[] share = new double[CONTRIBUTORS];
-        int size = 0;
-        for (int j : row.items) {
-            double s = lists.similarity(j, candidate) / row.items.length;
-            if (!(s > 0) || (size == CONTRIBUTORS && !(s > share[size - 1]))) {
-                continue;
-            }
-            int p = size < CONTRIBUTORS ? size++ : size - 1;
-            while (p > 0 && s > share[p - 1]) {
-                best[p] = best[p - 1];
-                share[p] = share[p - 1];
-                p--;
-            }
-            best[p] = j;
-            share[p] = s;
+    static List<List<Contribution>> contributors(NeighbourLists lists, java.util.function.IntFunction<String> compoundId,
+                                                 int[] history, int[] top, int[] slotOf) {
+        for (int t = 0; t < top.length; t++) {
+            slotOf[top[t]] = t + 1;
         }
-        List<Contribution> out = new ArrayList<>(size);
-        for (int t = 0; t < size; t++) {
-            out.add(new Contribution(model.compoundId(best[t]), share[t]));
+        int[][] best = new int[top.length][CONTRIBUTORS];
+        double[][] share = new double[top.length][CONTRIBUTORS];
+        int[] size = new int[top.length];
+        int[] lastFrom = new int[top.length];
+        java.util.Arrays.fill(lastFrom, -1);
+        for (int p = 0; p < history.length; p++) {
+            int j = history[p];
+            int[] ids = lists.neighbours(j);
+            double[] sims = lists.similarities(j);
+            for (int t = 0; t < ids.length; t++) {
+                int slot = slotOf[ids[t]] - 1;
+                if (slot < 0 || lastFrom[slot] == p) {
+                    continue;
+                }
+                lastFrom[slot] = p;
+                keepIfAmongBest(best[slot], share[slot], size, slot, j, sims[t] / history.length);
+            }
+        }
+        for (int i : top) {
+            slotOf[i] = 0;
+        }
+        List<List<Contribution>> out = new ArrayList<>(top.length);
+        for (int slot = 0; slot < top.length; slot++) {
+            List<Contribution> reasons = new ArrayList<>(size[slot]);
+            for (int t = 0; t < size[slot]; t++) {
+                reasons.add(new Contribution(compoundId.apply(best[slot][t]), share[slot][t]));
+            }
+            out.add(reasons);
         }
         return out;
+    }
+
+    /** Inserts (j, s) into one candidate's best-first list of at most {@link #CONTRIBUTORS}; s ≤ 0 is no share. */
+    private static void keepIfAmongBest(int[] best, double[] share, int[] sizes, int slot, int j, double s) {
+        int size = sizes[slot];
+        if (!(s > 0) || (size == CONTRIBUTORS && !(s > share[size - 1]))) {
+            return;
+        }
+        int p = size < CONTRIBUTORS ? size++ : size - 1;
+        while (p > 0 && s > share[p - 1]) {
+            best[p] = best[p - 1];
+            share[p] = share[p - 1];
+            p--;
+        }
+        best[p] = j;
+        share[p] = s;
+        sizes[slot] = size;
+    }
+
+    /** This thread's candidate-slot array (all zero between calls), sized to the catalogue. */
+    private int[] candidateSlots(int items) {
+        int[] slots = slotArrays.get();
+        if (slots == null || slots.length != items) {
+            slots = new int[items];
+            slotArrays.set(slots);
+        }
+        return slots;
     }
 
     /** The researcher's interactions in the model's index; compounds the version does not know drop out. */
