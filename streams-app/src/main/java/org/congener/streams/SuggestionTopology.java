@@ -18,6 +18,7 @@ import org.congener.schemas.Topic;
 import org.congener.schemas.TopicName;
 import org.congener.schemas.Topics;
 import org.congener.schemas.UsageEvent;
+import org.congener.schemas.serde.SuggestionsJsonWriter;
 import org.congener.streams.config.AppConfig;
 import org.congener.streams.processor.Intake;
 import org.congener.streams.processor.SuggestionProcessor;
@@ -170,8 +171,9 @@ public final class SuggestionTopology {
                 LATEST_SUGGESTIONS_STORE, PENDING_LISTS_STORE, researchers, catalog, stock);
         double halfLifeMs = settings.popularityHalfLife().toMillis();
         Topic<Suggestions> suggestions = topics.suggestions();
-        // the lists are this app's own output, built from checked values: written without a schema check
-        Serializer<Suggestions> listWriter = suggestions.valueSerde().serializer();
+        // the lists are this app's own output, built from checked values: written without a schema check,
+        // by the streaming writer that gives the topic serde's bytes without its reflection
+        Serializer<Suggestions> listWriter = new SuggestionsJsonWriter();
         intake.filter((key, value) -> value.isAccepted())
                 .mapValues(Intake::event)
                 .process(() -> new SuggestionProcessor(stores, scorer, models::live, InteractionWeights.defaults(),

@@ -73,7 +73,8 @@ import org.congener.streams.config.AppConfig;
  * and compounds are drawn with Zipf skew (a few heavy users, a long tail).
  *
  * <p>Arguments: compounds rank researchers rate(events/s) seconds burstEvents. System properties
- * {@code guarantee} and {@code commit.interval.ms} override the app's defaults for both runs.
+ * {@code guarantee}, {@code commit.interval.ms}, {@code scoring.batch.events} and {@code scoring.batch.wait.ms}
+ * override the app's defaults for both runs.
  */
 public final class StreamsEndToEnd {
 
@@ -154,7 +155,11 @@ public final class StreamsEndToEnd {
                 AppConfig.HTTP_PORT, "0",
                 AppConfig.PROCESSING_GUARANTEE, System.getProperty("guarantee", "exactly_once_v2"),
                 AppConfig.COMMIT_INTERVAL_MS, System.getProperty("commit.interval.ms",
-                        Long.toString(AppConfig.defaults().commitIntervalMs()))));
+                        Long.toString(AppConfig.defaults().commitIntervalMs())),
+                AppConfig.BATCH_EVENTS, System.getProperty(AppConfig.BATCH_EVENTS,
+                        Integer.toString(AppConfig.defaults().batchEvents())),
+                AppConfig.BATCH_WAIT_MS, System.getProperty(AppConfig.BATCH_WAIT_MS,
+                        Long.toString(AppConfig.defaults().batchWaitMs()))));
         try (StreamsApp app = StreamsApp.start(config, scorer)) {
             if (!app.awaitRunning(Duration.ofMinutes(3))) {
                 throw new IllegalStateException("streams app did not reach RUNNING");
