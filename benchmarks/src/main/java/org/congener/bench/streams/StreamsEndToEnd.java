@@ -80,6 +80,9 @@ public final class StreamsEndToEnd {
 
     private static final int NEIGHBOURS = 20;
     private static final int WARM_UP_EVENTS = 3_000;
+    /** Warm-up bursts at most, and the JIT share of a burst below which the JVM counts as warm. */
+    private static final int MAX_WARM_UP_ROUNDS = 30;
+    private static final double SETTLED_JIT_SHARE = 0.05;
 
     private StreamsEndToEnd() {
     }
@@ -102,7 +105,7 @@ public final class StreamsEndToEnd {
         Path dir = Files.createTempDirectory("congener-e2e");
         try (EmbeddedKafkaBroker broker = EmbeddedKafkaBroker.builder().dataDir(dir.resolve("broker")).port(0).start()) {
             String bootstrap = broker.bootstrapServers();
-            Workload workload = new Workload(researchers, compounds);
+            Workload workload = new Workload(researchers, compounds, 0);
             RunResult app = run(broker, dir, "e2e.", null, workload, compounds, rank, rate, seconds, burst);
             RunResult ceiling = run(broker, dir, "e2e-ceiling.", new OffersNothing(), workload, compounds, rank,
                     0, 0, burst);
@@ -143,7 +146,10 @@ public final class StreamsEndToEnd {
         TopicAdmin.createAll(bootstrap, prefix, 2, (short) 1);
         Topics topics = new Topics(prefix);
         long t0 = System.nanoTime();
-        publishWorld(bootstrap, topics, compounds, rank, workload.researchers());
+        // the researchers measured, and as many again for warm-up only, so that however long the JIT takes
+        // to settle, the measured researchers' histories are those of the paced and burst events alone
+        publishWorld(bootstrap, topics, compounds, rank, 2 * workload.researchers());
+        Workload warmUpWorkload = new Workload(workload.researchers(), compounds, workload.researchers());
         System.out.printf("[%s] catalogue, researchers and model v0001 published in %.1f s%n", label,
                 (System.nanoTime() - t0) / 1e9);
 
@@ -173,8 +179,20 @@ public final class StreamsEndToEnd {
             Thread.sleep(1_000);
             SplittableRandom random = new SplittableRandom(scorer == null ? 11 : 12);
 
-            unpaced(bootstrap, topics, "w", WARM_UP_EVENTS, workload, random, producedAt, latenciesNs, null);
-            System.out.printf("[%s] warm-up: %d events%n", label, WARM_UP_EVENTS);
+            // the broker shares this JVM: its code and the app's keep the JIT busy for tens of thousands of
+            // events, so warm-up runs until compiling takes under 5 % of a burst, not for a fixed count
+            for (int round = 1; round <= MAX_WARM_UP_ROUNDS; round++) {
+                long jitBefore = jitMillis();
+                long wallBefore = System.nanoTime();
+                unpaced(bootstrap, topics, "w" + round + "-", WARM_UP_EVENTS, warmUpWorkload, random, producedAt,
+                        latenciesNs, null);
+                double jitShare = (jitMillis() - jitBefore) / ((System.nanoTime() - wallBefore) / 1e6);
+                System.out.printf(Locale.ROOT, "[%s] warm-up %d: %d events, JIT compiling %.0f %% of the time%n",
+                        label, round, WARM_UP_EVENTS, 100 * jitShare);
+                if (jitShare < SETTLED_JIT_SHARE) {
+                    break;
+                }
+            }
 
             RunResult paced = null;
             int pacedCount = rate * seconds;
@@ -200,9 +218,16 @@ public final class StreamsEndToEnd {
                         label, rate, v.length, paced.p50Ms(), paced.p99Ms(), paced.maxMs());
             }
 
+            long jitBefore = jitMillis();
+            long wallBefore = System.nanoTime();
+            long streamCpuBefore = streamThreadCpuNanos(prefix + "bench");
             double perSecond = unpaced(bootstrap, topics, "b", burst, workload, random, producedAt, latenciesNs,
                     scorer == null ? workload : null);
-            System.out.printf(Locale.ROOT, "[%s] sustained: %d events at %.0f events/s%n", label, burst, perSecond);
+            double streamCpuPerEventUs = (streamThreadCpuNanos(prefix + "bench") - streamCpuBefore) / 1e3 / burst;
+            double jitShare = (jitMillis() - jitBefore) / ((System.nanoTime() - wallBefore) / 1e6);
+            System.out.printf(Locale.ROOT, "[%s] sustained: %d events at %.0f events/s; stream thread CPU %.0f µs per event"
+                    + " (%.0f %% busy); JIT compiling %.0f %% of the time%n", label, burst, perSecond, streamCpuPerEventUs,
+                    100 * streamCpuPerEventUs * perSecond / 1e6, 100 * jitShare);
             stop.set(true);
             reader.join();
             long[] store = scorer == null ? interactionStoreBytes(app) : new long[] {0, 0};
@@ -235,6 +260,24 @@ public final class StreamsEndToEnd {
             throw new IllegalStateException("only " + latenciesNs.size() + " of " + count + " lists arrived");
         }
         return count / secs;
+    }
+
+    /** CPU time so far of the app's stream threads (named after its application id). */
+    private static long streamThreadCpuNanos(String applicationId) {
+        java.lang.management.ThreadMXBean threads = java.lang.management.ManagementFactory.getThreadMXBean();
+        long total = 0;
+        for (java.lang.management.ThreadInfo info : threads.getThreadInfo(threads.getAllThreadIds())) {
+            if (info != null && info.getThreadName().startsWith(applicationId)
+                    && info.getThreadName().contains("-StreamThread-")) {
+                total += Math.max(0, threads.getThreadCpuTime(info.getThreadId()));
+            }
+        }
+        return total;
+    }
+
+    /** Milliseconds the JIT compilers have spent so far, summed over their threads. */
+    private static long jitMillis() {
+        return java.lang.management.ManagementFactory.getCompilationMXBean().getTotalCompilationTime();
     }
 
     private static void awaitLiveModel(StreamsApp app) throws InterruptedException {
@@ -290,14 +333,17 @@ public final class StreamsEndToEnd {
      */
     static final class Workload {
         private final int researchers;
+        private final int firstResearcher;
         private final Zipf users;
         private final Zipf items;
         private final Map<Integer, java.util.Set<Integer>> history = new java.util.HashMap<>();
         private long countedEvents;
         private long historySum;
 
-        Workload(int researchers, int compounds) {
+        /** @param firstResearcher index of the first researcher drawn from */
+        Workload(int researchers, int compounds, int firstResearcher) {
             this.researchers = researchers;
+            this.firstResearcher = firstResearcher;
             this.users = new Zipf(researchers, 1.0);
             this.items = new Zipf(compounds, 0.9);
         }
@@ -307,7 +353,7 @@ public final class StreamsEndToEnd {
         }
 
         int[] next(SplittableRandom random, boolean count) {
-            int user = users.next(random);
+            int user = firstResearcher + users.next(random);
             int item = items.next(random);
             java.util.Set<Integer> seen = history.computeIfAbsent(user, u -> new java.util.HashSet<>());
             seen.add(item);
