@@ -175,6 +175,8 @@ public final class StreamsEndToEnd {
             List<Long> latenciesNs = java.util.Collections.synchronizedList(new ArrayList<>());
             AtomicBoolean stop = new AtomicBoolean();
             Thread reader = new Thread(() -> readSuggestions(bootstrap, topics, producedAt, latenciesNs, stop));
+            // a failed run must not leave the JVM waiting on its reader
+            reader.setDaemon(true);
             reader.start();
             Thread.sleep(1_000);
             SplittableRandom random = new SplittableRandom(scorer == null ? 11 : 12);
