@@ -11,7 +11,10 @@ import org.congener.core.factorisation.DenseKernels;
  * clients ran between two events), for Y held as doubles and as floats. Eviction: a pass over a
  * buffer far larger than the last-level cache between two products; the pass is not timed.
  *
- * <p>Arguments: items rank repetitions evictionMegabytes.
+ * <p>Then the product of a batch of B researchers' vectors with one pass over the floats, as the
+ * stream scores a batch of events ({@link DenseKernels#multiplyMany}), reported per vector.
+ *
+ * <p>Arguments: items rank repetitions evictionMegabytes batch.
  */
 public final class ColdCacheProduct {
 
@@ -23,6 +26,7 @@ public final class ColdCacheProduct {
         int rank = args.length > 1 ? Integer.parseInt(args[1]) : 64;
         int repetitions = args.length > 2 ? Integer.parseInt(args[2]) : 200;
         int evictMb = args.length > 3 ? Integer.parseInt(args[3]) : 256;
+        int batch = args.length > 4 ? Integer.parseInt(args[4]) : 8;
         SplittableRandom random = new SplittableRandom(7);
         float[] narrow = new float[items * rank];
         double[] wide = new double[items * rank];
@@ -32,6 +36,11 @@ public final class ColdCacheProduct {
         }
         double[] x = random.doubles(rank, -1, 1).toArray();
         double[] out = new double[items];
+        double[][] xs = new double[batch][];
+        for (int b = 0; b < batch; b++) {
+            xs[b] = random.doubles(rank, -1, 1).toArray();
+        }
+        double[][] outs = new double[batch][items];
         double[] scratch = new double[DenseKernels.WIDEN_BLOCK_ROWS * rank];
         long[] evict = new long[evictMb * 131_072];
         DenseKernels kernels = DenseKernels.best();
@@ -43,11 +52,17 @@ public final class ColdCacheProduct {
             double[] hotNarrow = time(repetitions, () -> kernels.multiply(narrow, 0, items, rank, x, 0, out, 0, scratch), null);
             double[] coldWide = time(repetitions, () -> kernels.multiply(wide, 0, items, rank, x, 0, out, 0), evict);
             double[] coldNarrow = time(repetitions, () -> kernels.multiply(narrow, 0, items, rank, x, 0, out, 0, scratch), evict);
+            double[] hotBatch = time(repetitions, () -> kernels.multiplyMany(narrow, 0, items, rank, xs, batch, outs, 0,
+                    scratch), null);
+            double[] coldBatch = time(repetitions, () -> kernels.multiplyMany(narrow, 0, items, rank, xs, batch, outs, 0,
+                    scratch), evict);
             if (round == 1) {
                 report("doubles, in cache", hotWide, wide.length * 8L);
                 report("floats,  in cache", hotNarrow, narrow.length * 4L);
                 report("doubles, evicted ", coldWide, wide.length * 8L);
                 report("floats,  evicted ", coldNarrow, narrow.length * 4L);
+                reportPerVector("floats,  batch of " + batch + ", in cache", hotBatch, batch);
+                reportPerVector("floats,  batch of " + batch + ", evicted ", coldBatch, batch);
             }
         }
         System.out.println(out[items / 2] == 12345.0 ? "" : "");
@@ -73,6 +88,11 @@ public final class ColdCacheProduct {
         }
         java.util.Arrays.sort(micros);
         return micros;
+    }
+
+    private static void reportPerVector(String what, double[] micros, int batch) {
+        System.out.printf(Locale.ROOT, "%s: median %.0f µs per vector (min %.0f, p90 %.0f)%n", what,
+                micros[micros.length / 2] / batch, micros[0] / batch, micros[(int) (micros.length * 0.9)] / batch);
     }
 
     private static void report(String what, double[] micros, long bytes) {
