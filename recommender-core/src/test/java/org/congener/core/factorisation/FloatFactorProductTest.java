@@ -18,12 +18,8 @@ class FloatFactorProductTest {
         for (DenseKernels kernels : new DenseKernels[] {DenseKernels.best(), DenseKernels.scalar()}) {
             for (int n : ranks) {
                 for (int rows : rowCounts) {
-                    float[] narrow = new float[3 + rows * n];
-                    double[] wide = new double[narrow.length];
-                    for (int t = 0; t < narrow.length; t++) {
-                        narrow[t] = (float) random.nextGaussian(0, 0.3);
-                        wide[t] = narrow[t];
-                    }
+                    float[] narrow = floatFactors(random, 3 + rows * n);
+                    double[] wide = widened(narrow);
                     double[] x = new double[n];
                     for (int t = 0; t < n; t++) {
                         x[t] = random.nextGaussian();
@@ -48,12 +44,8 @@ class FloatFactorProductTest {
         for (DenseKernels kernels : new DenseKernels[] {DenseKernels.best(), DenseKernels.scalar()}) {
             for (int n : ranks) {
                 for (int rows : rowCounts) {
-                    float[] narrow = new float[3 + rows * n];
-                    double[] wide = new double[narrow.length];
-                    for (int t = 0; t < narrow.length; t++) {
-                        narrow[t] = (float) random.nextGaussian(0, 0.3);
-                        wide[t] = narrow[t];
-                    }
+                    float[] narrow = floatFactors(random, 3 + rows * n);
+                    double[] wide = widened(narrow);
                     int count = 1 + random.nextInt(9);
                     double[][] xs = new double[count + 1][n];
                     for (double[] x : xs) {
@@ -82,5 +74,22 @@ class FloatFactorProductTest {
                 }
             }
         }
+    }
+
+    /** Factors as published: floats, here Gaussian with the spread of fitted ones. */
+    private static float[] floatFactors(SplittableRandom random, int length) {
+        float[] narrow = new float[length];
+        for (int t = 0; t < length; t++) {
+            narrow[t] = (float) random.nextGaussian(0, 0.3);
+        }
+        return narrow;
+    }
+
+    private static double[] widened(float[] narrow) {
+        double[] wide = new double[narrow.length];
+        for (int t = 0; t < narrow.length; t++) {
+            wide[t] = narrow[t];
+        }
+        return wide;
     }
 }

@@ -70,7 +70,7 @@ final class SuggestionsCorpus {
             items.add(validItem(rank));
         }
         return new Suggestions(SchemaIds.SUGGESTIONS, validId(), random.nextInt(3) == 0 ? null : validId(),
-                pick(SuggestionSource.values()), random.nextInt(4) == 0 ? null : validId(), validInstant(), items,
+                RandomPicks.pick(random, SuggestionSource.values()), random.nextInt(4) == 0 ? null : validId(), validInstant(), items,
                 validCaution());
     }
 
@@ -97,10 +97,10 @@ final class SuggestionsCorpus {
 
     /** Not blank, no control characters: a visible character first, then anything from {@link #TEXT_CHARS}. */
     private String validText() {
-        StringBuilder text = new StringBuilder().append(pick("V", "ü", "α", "\"", "\\", "中"));
+        StringBuilder text = new StringBuilder().append(RandomPicks.pick(random, "V", "ü", "α", "\"", "\\", "中"));
         int length = random.nextInt(40);
         for (int i = 0; i < length; i++) {
-            text.append(pick(TEXT_CHARS));
+            text.append(RandomPicks.pick(random, TEXT_CHARS));
         }
         return text.toString();
     }
@@ -110,8 +110,8 @@ final class SuggestionsCorpus {
         StringBuilder text = new StringBuilder("Suggestions are no safety review.");
         int extra = random.nextInt(4) == 0 ? 1 + random.nextInt(600) : 0;
         for (int i = 0; i < extra; i++) {
-            text.append(random.nextInt(8) == 0 ? pick("\n", "\r\n", "\t", "\u0000", "\u001F", "\u007F", "\b")
-                    : pick(TEXT_CHARS));
+            text.append(random.nextInt(8) == 0 ? RandomPicks.pick(random, "\n", "\r\n", "\t", "\u0000", "\u001F", "\u007F", "\b")
+                    : RandomPicks.pick(random, TEXT_CHARS));
         }
         return text.toString();
     }
@@ -128,14 +128,14 @@ final class SuggestionsCorpus {
 
     private String hazardCode() {
         return "H" + (2 + random.nextInt(3)) + random.nextInt(10) + random.nextInt(10)
-                + pick("", "", "", "F", "D", "fd", "FD", "Df");
+                + RandomPicks.pick(random, "", "", "", "F", "D", "fd", "FD", "Df");
     }
 
     private String validInstant() {
-        String fraction = random.nextBoolean() ? "" : "." + digits(1 + random.nextInt(9));
+        String fraction = random.nextBoolean() ? "" : "." + RandomPicks.digits(random, 1 + random.nextInt(9));
         // an offset of at most 17:59 either way, the range that a date-time format check accepts
         String offset = random.nextBoolean() ? "Z"
-                : String.format("%s%02d:%02d", pick("+", "-"), random.nextInt(18), random.nextInt(60));
+                : String.format("%s%02d:%02d", RandomPicks.pick(random, "+", "-"), random.nextInt(18), random.nextInt(60));
         return String.format("%04d-%02d-%02dT%02d:%02d:%02d%s%s", 1970 + random.nextInt(130), 1 + random.nextInt(12),
                 1 + random.nextInt(28), random.nextInt(24), random.nextInt(60), random.nextInt(60), fraction,
                 "-00:00".equals(offset) ? "Z" : offset);
@@ -168,7 +168,7 @@ final class SuggestionsCorpus {
 
     private Suggestions anyList() {
         return new Suggestions(anyString(), anyString(), anyString(), random.nextInt(8) == 0 ? null
-                : pick(SuggestionSource.values()), anyString(), anyString(), anyList(this::anyItem), anyString());
+                : RandomPicks.pick(random, SuggestionSource.values()), anyString(), anyString(), anyList(this::anyItem), anyString());
     }
 
     private Suggestion anyItem() {
@@ -210,7 +210,7 @@ final class SuggestionsCorpus {
         };
         StringBuilder text = new StringBuilder(length);
         for (int i = 0; i < length; i++) {
-            text.append(pick(ANY_CHARS));
+            text.append(RandomPicks.pick(random, ANY_CHARS));
         }
         return text.toString();
     }
@@ -225,7 +225,7 @@ final class SuggestionsCorpus {
 
     private int anyRank() {
         return switch (random.nextInt(4)) {
-            case 0 -> pick(0, -1, 1000, 1001, 65_536, 1_000_000, Integer.MAX_VALUE, Integer.MIN_VALUE);
+            case 0 -> RandomPicks.pick(random, 0, -1, 1000, 1001, 65_536, 1_000_000, Integer.MAX_VALUE, Integer.MIN_VALUE);
             case 1 -> random.nextInt();
             default -> 1 + random.nextInt(1000);
         };
@@ -233,18 +233,7 @@ final class SuggestionsCorpus {
 
     // ---- helpers ----
 
-    private String digits(int count) {
-        StringBuilder out = new StringBuilder(count);
-        for (int i = 0; i < count; i++) {
-            out.append((char) ('0' + random.nextInt(10)));
-        }
-        return out.toString();
-    }
 
-    @SafeVarargs
-    private <V> V pick(V... values) {
-        return values[random.nextInt(values.length)];
-    }
 
     private double pickDouble(double... values) {
         return values[random.nextInt(values.length)];

@@ -59,7 +59,7 @@ final class UsageEventCorpus {
         int roll = random.nextInt(10);
         int mistakes = roll < 2 ? 0 : roll < 8 ? 1 : 2;
         for (int i = 0; i < mistakes; i++) {
-            how.append(' ').append(pick(MUTATIONS).apply(this, event));
+            how.append(' ').append(RandomPicks.pick(random, MUTATIONS).apply(this, event));
         }
         String text = event.render(random);
         return new Payload(how.toString(), event.encode(text));
@@ -74,9 +74,9 @@ final class UsageEventCorpus {
         for (String idField : List.of("eventId", "researcherId", "compoundId")) {
             event.put(idField, string(validId()));
         }
-        event.put("kind", string(pick("ORDER", "WITHDRAWAL", "USAGE_LOG", "VIEW")));
+        event.put("kind", string(RandomPicks.pick(random, "ORDER", "WITHDRAWAL", "USAGE_LOG", "VIEW")));
         event.put("quantity", validQuantity());
-        event.put("unit", string(pick("g", "mg", "kg", "mL", "L", "uL", "µL", "μL", "mol", "mmol", "ea", "mg/mL",
+        event.put("unit", string(RandomPicks.pick(random, "g", "mg", "kg", "mL", "L", "uL", "µL", "μL", "mol", "mmol", "ea", "mg/mL",
                 "g.L", "µmol", "aaaaaaaaaaaaaaaa")));
         event.put("occurredAt", string(validInstant()));
         if (random.nextInt(4) == 0) {
@@ -102,19 +102,19 @@ final class UsageEventCorpus {
         return switch (random.nextInt(6)) {
             case 0 -> Integer.toString(random.nextInt(10_000));
             case 1 -> random.nextInt(1000) + "." + random.nextInt(1000);
-            case 2 -> (1 + random.nextInt(9)) + "." + random.nextInt(100) + pick("e", "E") + pick("", "+", "-")
+            case 2 -> (1 + random.nextInt(9)) + "." + random.nextInt(100) + RandomPicks.pick(random, "e", "E") + RandomPicks.pick(random, "", "+", "-")
                     + random.nextInt(300);
             case 3 -> Double.toString(random.nextDouble() * Math.pow(10, random.nextInt(20) - 10));
-            case 4 -> pick("0", "0.0", "-0", "0e0", "25.0", "1E2", "4.9e-324", "9223372036854775807");
+            case 4 -> RandomPicks.pick(random, "0", "0.0", "-0", "0e0", "25.0", "1E2", "4.9e-324", "9223372036854775807");
             default -> Long.toString(random.nextLong() & Long.MAX_VALUE);
         };
     }
 
     private String validInstant() {
-        int year = random.nextInt(10) == 0 ? pick(0, 4, 1600, 1900, 2000, 2100, 2400, 9999) : 1970 + random.nextInt(80);
+        int year = random.nextInt(10) == 0 ? RandomPicks.pick(random, 0, 4, 1600, 1900, 2000, 2100, 2400, 9999) : 1970 + random.nextInt(80);
         int month = 1 + random.nextInt(12);
         int day = random.nextInt(3) == 0 ? Month.of(month).length(Year.isLeap(year)) : 1 + random.nextInt(28);
-        String fraction = random.nextBoolean() ? "" : "." + digits(1 + random.nextInt(9));
+        String fraction = random.nextBoolean() ? "" : "." + RandomPicks.digits(random, 1 + random.nextInt(9));
         String offset = random.nextBoolean() ? "Z" : validOffset();
         return String.format("%04d-%02d-%02dT%02d:%02d:%02d%s%s", year, month, day, random.nextInt(24),
                 random.nextInt(60), random.nextInt(60), fraction, offset);
@@ -122,7 +122,7 @@ final class UsageEventCorpus {
 
     private String validOffset() {
         int minutes = random.nextInt(18 * 60 + 1);
-        String sign = minutes == 0 ? "+" : pick("+", "-");
+        String sign = minutes == 0 ? "+" : RandomPicks.pick(random, "+", "-");
         return String.format("%s%02d:%02d", sign, minutes / 60, minutes % 60);
     }
 
@@ -137,27 +137,27 @@ final class UsageEventCorpus {
             UsageEventCorpus::encoding, UsageEventCorpus::brokenBytes, UsageEventCorpus::deepValue);
 
     private String dropField(PayloadDraft event) {
-        String field = pick(FIELDS);
+        String field = RandomPicks.pick(random, FIELDS);
         event.remove(field);
         return "drop:" + field;
     }
 
     private String extraField(PayloadDraft event) {
-        String name = pick("price", "Schema", "eventid", "", "schema ", "quantity2", "é", "occurred_at", "$ref");
-        event.put(name, pick("12.5", "null", "\"x\"", "{}", "[1,2]", "true"));
+        String name = RandomPicks.pick(random, "price", "Schema", "eventid", "", "schema ", "quantity2", "é", "occurred_at", "$ref");
+        event.put(name, RandomPicks.pick(random, "12.5", "null", "\"x\"", "{}", "[1,2]", "true"));
         return "extra:" + name;
     }
 
     private String wrongType(PayloadDraft event) {
-        String field = pick(FIELDS);
-        event.put(field, pick("null", "true", "false", "0", "-1", "1.5", "\"text\"", "\"\"", "[]", "{}",
+        String field = RandomPicks.pick(random, FIELDS);
+        event.put(field, RandomPicks.pick(random, "null", "true", "false", "0", "-1", "1.5", "\"text\"", "\"\"", "[]", "{}",
                 "[1,\"a\",{\"b\":null}]", "{\"a\":{\"b\":[]}}", "\"25\""));
         return "type:" + field;
     }
 
     private String oddId(PayloadDraft event) {
-        String field = pick("eventId", "researcherId", "compoundId");
-        String value = pick("", "a".repeat(129), "a".repeat(128), "-a", ".a", "_a", "@a", ":a", "a b", "a\n",
+        String field = RandomPicks.pick(random, "eventId", "researcherId", "compoundId");
+        String value = RandomPicks.pick(random, "", "a".repeat(129), "a".repeat(128), "-a", ".a", "_a", "@a", ":a", "a b", "a\n",
                 "a\r\n", "a\u2028", "é", "a/b", "a#", "a\u0000", "ａ", "a\uD83D\uDE00", "A:b@c.d_e-f", "0", "a\t",
                 " a", "\u0661", "Z" + "9".repeat(127), "a\u00B5");
         event.put(field, string(value));
@@ -165,7 +165,7 @@ final class UsageEventCorpus {
     }
 
     private String oddQuantity(PayloadDraft event) {
-        String value = pick("-1", "-0", "-0.0", "0", "0.0", "-1e-400", "1e400", "-1e400", "1E+2", "1e-2",
+        String value = RandomPicks.pick(random, "-1", "-0", "-0.0", "0", "0.0", "-1e-400", "1e400", "-1e400", "1E+2", "1e-2",
                 "1.7976931348623157e308", "1.7976931348623159e308", "4.9e-324", "-4.9e-324", MAX_DOUBLE_AS_INTEGER,
                 ROUNDS_TO_INFINITY, "-" + MAX_DOUBLE_AS_INTEGER, "1" + "0".repeat(400), "-1" + "0".repeat(400),
                 "01", ".5", "1.", "+1", "NaN", "Infinity", "-Infinity", "0x10", "1e", "1.5e+", "-", "--1", "1_000",
@@ -179,7 +179,7 @@ final class UsageEventCorpus {
         String value = switch (random.nextInt(3)) {
             case 0 -> misspelt(validInstant());
             case 1 -> nearlyValidInstant();
-            default -> pick("2026-03-14t09:26:53Z", "2026-03-14 09:26:53Z", "2026-03-14T09:26:53Z\n",
+            default -> RandomPicks.pick(random, "2026-03-14t09:26:53Z", "2026-03-14 09:26:53Z", "2026-03-14T09:26:53Z\n",
                     " 2026-03-14T09:26:53Z", "20260314T092653Z", "2026-03-14", "\u0662026-03-14T09:26:53Z",
                     "+2026-03-14T09:26:53Z", "2026-03-14T09:26:53+05", "2026-03-14T09:26:53UTC", "");
         };
@@ -191,9 +191,9 @@ final class UsageEventCorpus {
         StringBuilder out = new StringBuilder(text);
         int at = random.nextInt(out.length());
         switch (random.nextInt(4)) {
-            case 0 -> out.setCharAt(at, pick("0123456789-:TZtz+. \n/\u0661".split("")).charAt(0));
+            case 0 -> out.setCharAt(at, RandomPicks.pick(random, "0123456789-:TZtz+. \n/\u0661".split("")).charAt(0));
             case 1 -> out.deleteCharAt(at);
-            case 2 -> out.insert(at, pick("0123456789-:TZ+.".split("")));
+            case 2 -> out.insert(at, RandomPicks.pick(random, "0123456789-:TZ+.".split("")));
             default -> out.setLength(at);
         }
         return out.toString();
@@ -201,21 +201,21 @@ final class UsageEventCorpus {
 
     /** Well formed, each part usually valid and near an edge of the calendar, the clock or the offset range. */
     private String nearlyValidInstant() {
-        int year = pick(0, 4, 100, 1600, 1900, 2000, 2023, 2024, 2100, 2400, 9999, 1900, 2100, 2200);
-        int month = random.nextInt(5) == 0 ? pick(0, 13) : random.nextBoolean() ? 2 : 1 + random.nextInt(12);
-        int day = random.nextInt(5) == 0 ? pick(0, 32) : random.nextBoolean() ? 29 : pick(28, 30, 31);
-        String time = random.nextInt(5) == 0 ? pick("24:00:00", "23:60:00", "23:59:60", "9:00:00")
-                : pick("00:00:00", "23:59:59", "12:30:45");
-        String fraction = random.nextInt(5) == 0 ? pick(".", ".1234567890") : pick("", ".5", ".123456789");
+        int year = RandomPicks.pick(random, 0, 4, 100, 1600, 1900, 2000, 2023, 2024, 2100, 2400, 9999, 1900, 2100, 2200);
+        int month = random.nextInt(5) == 0 ? RandomPicks.pick(random, 0, 13) : random.nextBoolean() ? 2 : 1 + random.nextInt(12);
+        int day = random.nextInt(5) == 0 ? RandomPicks.pick(random, 0, 32) : random.nextBoolean() ? 29 : RandomPicks.pick(random, 28, 30, 31);
+        String time = random.nextInt(5) == 0 ? RandomPicks.pick(random, "24:00:00", "23:60:00", "23:59:60", "9:00:00")
+                : RandomPicks.pick(random, "00:00:00", "23:59:59", "12:30:45");
+        String fraction = random.nextInt(5) == 0 ? RandomPicks.pick(random, ".", ".1234567890") : RandomPicks.pick(random, "", ".5", ".123456789");
         String offset = random.nextInt(3) == 0
-                ? pick("-00:00", "-00:00", "+18:01", "-18:01", "+23:59", "+24:00", "+05:60", "+5:00", "+0500", "z", "")
-                : pick("Z", "+18:00", "-18:00", "-00:01", "+00:00", "+14:00", "-17:59");
+                ? RandomPicks.pick(random, "-00:00", "-00:00", "+18:01", "-18:01", "+23:59", "+24:00", "+05:60", "+5:00", "+0500", "z", "")
+                : RandomPicks.pick(random, "Z", "+18:00", "-18:00", "-00:01", "+00:00", "+14:00", "-17:59");
         return String.format("%04d-%02d-%02dT%s%s%s", year, month, day, time, fraction, offset);
     }
 
     private String repeatedName(PayloadDraft event) {
-        String field = pick(FIELDS);
-        String value = pick("\"BUY\"", "\"ORDER\"", "\"VIEW\"", "1", "-1", "null", "{}", "[[1]]",
+        String field = RandomPicks.pick(random, FIELDS);
+        String value = RandomPicks.pick(random, "\"BUY\"", "\"ORDER\"", "\"VIEW\"", "1", "-1", "null", "{}", "[[1]]",
                 "\"congener/usage-event/v1\"", "\"2026-03-14T09:26:53Z\"", "\"2026-02-30T09:26:53Z\"", "\"g\"",
                 "\"e-2\"", "\"\"", "{\"kind\":\"ORDER\"}");
         boolean before = random.nextBoolean();
@@ -224,26 +224,26 @@ final class UsageEventCorpus {
     }
 
     private String oddUnit(PayloadDraft event) {
-        event.put("unit", string(pick("µL", "μL", "Μ", "µ", "g/µL", "ℓ", "g²", "m³", "uL", "1g", "g ", "",
+        event.put("unit", string(RandomPicks.pick(random, "µL", "μL", "Μ", "µ", "g/µL", "ℓ", "g²", "m³", "uL", "1g", "g ", "",
                 "a".repeat(17), "a".repeat(16), "/g", ".g", "g\n", "G", "µ".repeat(16), "µ".repeat(17), "g-1")));
         return "unit";
     }
 
     private String oddKind(PayloadDraft event) {
-        event.put("kind", string(pick("order", "BUY", "ORDER ", " ORDER", "", "USAGE-LOG", "Order", "VIEW\u0000",
+        event.put("kind", string(RandomPicks.pick(random, "order", "BUY", "ORDER ", " ORDER", "", "USAGE-LOG", "Order", "VIEW\u0000",
                 "ORDER", "USAGE_LOG"), true));
         return "kind";
     }
 
     private String oddSchema(PayloadDraft event) {
-        event.put("schema", string(pick("congener/usage-event/v2", "congener/usage-event/v1 ",
+        event.put("schema", string(RandomPicks.pick(random, "congener/usage-event/v2", "congener/usage-event/v1 ",
                 "Congener/usage-event/v1", "congener/usage-event/", "congener/inventory-event/v1",
                 "congener/usage-event/v1"), true));
         return "schema";
     }
 
     private String layout(PayloadDraft event) {
-        event.spacing = pick(" ", "\t", "\n", "\r\n", "  \n\t ");
+        event.spacing = RandomPicks.pick(random, " ", "\t", "\n", "\r\n", "  \n\t ");
         if (random.nextBoolean()) {
             event.shuffle(random);
         }
@@ -251,12 +251,12 @@ final class UsageEventCorpus {
     }
 
     private String trailing(PayloadDraft event) {
-        event.suffix = pick(" ", "\n", " x", "}", "{}", "null", "[", ",", "\u0000", "//c", "/* c */", "#", "\r\n\t");
+        event.suffix = RandomPicks.pick(random, " ", "\n", " x", "}", "{}", "null", "[", ",", "\u0000", "//c", "/* c */", "#", "\r\n\t");
         return "trailing";
     }
 
     private String notAnEvent(PayloadDraft event) {
-        event.whole = pick("[]", "null", "1", "\"s\"", "true", "", " ", "{", "}", "{}", "{\"schema\"}", "[%s]",
+        event.whole = RandomPicks.pick(random, "[]", "null", "1", "\"s\"", "true", "", " ", "{", "}", "{}", "{\"schema\"}", "[%s]",
                 "{\"event\":%s}", "%s%s", "\uFEFF%s", "\"%s\"");
         return "whole:" + event.whole;
     }
@@ -267,27 +267,27 @@ final class UsageEventCorpus {
     }
 
     private String encoding(PayloadDraft event) {
-        event.charset = pick(StandardCharsets.UTF_16BE, StandardCharsets.UTF_16LE, StandardCharsets.UTF_16,
+        event.charset = RandomPicks.pick(random, StandardCharsets.UTF_16BE, StandardCharsets.UTF_16LE, StandardCharsets.UTF_16,
                 Charset.forName("UTF-32BE"), StandardCharsets.ISO_8859_1);
         return "charset:" + event.charset;
     }
 
     private String brokenBytes(PayloadDraft event) {
-        String field = pick(FIELDS);
+        String field = RandomPicks.pick(random, FIELDS);
         switch (random.nextInt(3)) {
             case 0 -> event.put(field, "\"a" + PayloadDraft.BROKEN + "\"");
             case 1 -> event.repeat(field, "[\"" + PayloadDraft.BROKEN + "\"]", true);
             default -> event.put("x" + PayloadDraft.BROKEN, "1");
         }
-        event.brokenBytes = pick(new byte[] {(byte) 0xC3, 0x28}, new byte[] {(byte) 0xFF}, new byte[] {(byte) 0x80},
+        event.brokenBytes = RandomPicks.pick(random, new byte[] {(byte) 0xC3, 0x28}, new byte[] {(byte) 0xFF}, new byte[] {(byte) 0x80},
                 new byte[] {(byte) 0xE2, (byte) 0x82}, new byte[] {(byte) 0xC0, (byte) 0xAF},
                 new byte[] {(byte) 0xED, (byte) 0xA0, (byte) 0x80});
         return "broken:" + field;
     }
 
     private String deepValue(PayloadDraft event) {
-        int depth = pick(10, 400, 999, 1000, 1001, 1500);
-        String field = pick(FIELDS);
+        int depth = RandomPicks.pick(random, 10, 400, 999, 1000, 1001, 1500);
+        String field = RandomPicks.pick(random, FIELDS);
         event.repeat(field, "[".repeat(depth) + "]".repeat(depth), true);
         return "deep:" + field + ":" + depth;
     }
@@ -314,20 +314,4 @@ final class UsageEventCorpus {
         return out.append('"').toString();
     }
 
-    private String digits(int count) {
-        StringBuilder out = new StringBuilder();
-        for (int i = 0; i < count; i++) {
-            out.append((char) ('0' + random.nextInt(10)));
-        }
-        return out.toString();
-    }
-
-    @SafeVarargs
-    private <V> V pick(V... values) {
-        return values[random.nextInt(values.length)];
-    }
-
-    private <V> V pick(List<V> values) {
-        return values.get(random.nextInt(values.size()));
-    }
 }
