@@ -155,6 +155,9 @@ final class VectorKernels implements DenseKernels {
         for (; r + 4 <= rows; r += 4) {
             int rowsAt = aOff + r * n;
             int c = 0;
+            for (; c + 4 <= count; c += 4) {
+                fourRowsFourVectors(a, rowsAt, n, xs, c, outs, outOff + r);
+            }
             for (; c + 2 <= count; c += 2) {
                 fourRowsTwoVectors(a, rowsAt, n, xs[c], xs[c + 1], outs[c], outs[c + 1], outOff + r);
             }
@@ -187,6 +190,74 @@ final class VectorKernels implements DenseKernels {
             acc2 = widened(a, o2 + t).fma(vx, acc2);
             acc3 = widened(a, o3 + t).fma(vx, acc3);
         }
+        finish(a, o0, n, body, x, xOff, acc0, acc1, acc2, acc3, out, at);
+    }
+
+    /**
+     * {@link #fourRows} for vectors c..c+3 at once: each widened row block serves four vectors, sixteen
+     * independent accumulator chains.
+     */
+    private static void fourRowsFourVectors(float[] a, int o0, int n, double[][] xs, int c, double[][] outs, int at) {
+        int lanes = SPECIES.length();
+        int body = n - n % lanes;
+        int o1 = o0 + n;
+        int o2 = o1 + n;
+        int o3 = o2 + n;
+        double[] xa = xs[c];
+        double[] xb = xs[c + 1];
+        double[] xc = xs[c + 2];
+        double[] xd = xs[c + 3];
+        DoubleVector a0 = DoubleVector.zero(SPECIES);
+        DoubleVector a1 = a0;
+        DoubleVector a2 = a0;
+        DoubleVector a3 = a0;
+        DoubleVector b0 = a0;
+        DoubleVector b1 = a0;
+        DoubleVector b2 = a0;
+        DoubleVector b3 = a0;
+        DoubleVector c0 = a0;
+        DoubleVector c1 = a0;
+        DoubleVector c2 = a0;
+        DoubleVector c3 = a0;
+        DoubleVector d0 = a0;
+        DoubleVector d1 = a0;
+        DoubleVector d2 = a0;
+        DoubleVector d3 = a0;
+        for (int t = 0; t < body; t += lanes) {
+            DoubleVector w0 = widened(a, o0 + t);
+            DoubleVector w1 = widened(a, o1 + t);
+            DoubleVector w2 = widened(a, o2 + t);
+            DoubleVector w3 = widened(a, o3 + t);
+            DoubleVector va = DoubleVector.fromArray(SPECIES, xa, t);
+            a0 = w0.fma(va, a0);
+            a1 = w1.fma(va, a1);
+            a2 = w2.fma(va, a2);
+            a3 = w3.fma(va, a3);
+            DoubleVector vb = DoubleVector.fromArray(SPECIES, xb, t);
+            b0 = w0.fma(vb, b0);
+            b1 = w1.fma(vb, b1);
+            b2 = w2.fma(vb, b2);
+            b3 = w3.fma(vb, b3);
+            DoubleVector vc = DoubleVector.fromArray(SPECIES, xc, t);
+            c0 = w0.fma(vc, c0);
+            c1 = w1.fma(vc, c1);
+            c2 = w2.fma(vc, c2);
+            c3 = w3.fma(vc, c3);
+            DoubleVector vd = DoubleVector.fromArray(SPECIES, xd, t);
+            d0 = w0.fma(vd, d0);
+            d1 = w1.fma(vd, d1);
+            d2 = w2.fma(vd, d2);
+            d3 = w3.fma(vd, d3);
+        }
+        finish(a, o0, n, body, xa, 0, a0, a1, a2, a3, outs[c], at);
+        finish(a, o0, n, body, xb, 0, b0, b1, b2, b3, outs[c + 1], at);
+        finish(a, o0, n, body, xc, 0, c0, c1, c2, c3, outs[c + 2], at);
+        finish(a, o0, n, body, xd, 0, d0, d1, d2, d3, outs[c + 3], at);
+    }
+
+    /** The four rows' lane sums, then their tails in dot's order, into out[at..at+4). */
+    private static void finish(float[] a, int o0, int n, int body, double[] x, int xOff, DoubleVector acc0,
+                               DoubleVector acc1, DoubleVector acc2, DoubleVector acc3, double[] out, int at) {
         double s0 = acc0.reduceLanes(VectorOperators.ADD);
         double s1 = acc1.reduceLanes(VectorOperators.ADD);
         double s2 = acc2.reduceLanes(VectorOperators.ADD);
@@ -194,9 +265,9 @@ final class VectorKernels implements DenseKernels {
         for (int t = body; t < n; t++) {
             double xt = x[xOff + t];
             s0 += (double) a[o0 + t] * xt;
-            s1 += (double) a[o1 + t] * xt;
-            s2 += (double) a[o2 + t] * xt;
-            s3 += (double) a[o3 + t] * xt;
+            s1 += (double) a[o0 + n + t] * xt;
+            s2 += (double) a[o0 + 2 * n + t] * xt;
+            s3 += (double) a[o0 + 3 * n + t] * xt;
         }
         out[at] = s0;
         out[at + 1] = s1;
@@ -236,34 +307,8 @@ final class VectorKernels implements DenseKernels {
             z2 = w2.fma(vz, z2);
             z3 = w3.fma(vz, z3);
         }
-        double sx0 = x0.reduceLanes(VectorOperators.ADD);
-        double sx1 = x1.reduceLanes(VectorOperators.ADD);
-        double sx2 = x2.reduceLanes(VectorOperators.ADD);
-        double sx3 = x3.reduceLanes(VectorOperators.ADD);
-        double sz0 = z0.reduceLanes(VectorOperators.ADD);
-        double sz1 = z1.reduceLanes(VectorOperators.ADD);
-        double sz2 = z2.reduceLanes(VectorOperators.ADD);
-        double sz3 = z3.reduceLanes(VectorOperators.ADD);
-        for (int t = body; t < n; t++) {
-            double xt = x[t];
-            double zt = z[t];
-            sx0 += (double) a[o0 + t] * xt;
-            sx1 += (double) a[o1 + t] * xt;
-            sx2 += (double) a[o2 + t] * xt;
-            sx3 += (double) a[o3 + t] * xt;
-            sz0 += (double) a[o0 + t] * zt;
-            sz1 += (double) a[o1 + t] * zt;
-            sz2 += (double) a[o2 + t] * zt;
-            sz3 += (double) a[o3 + t] * zt;
-        }
-        outX[at] = sx0;
-        outX[at + 1] = sx1;
-        outX[at + 2] = sx2;
-        outX[at + 3] = sx3;
-        outZ[at] = sz0;
-        outZ[at + 1] = sz1;
-        outZ[at + 2] = sz2;
-        outZ[at + 3] = sz3;
+        finish(a, o0, n, body, x, 0, x0, x1, x2, x3, outX, at);
+        finish(a, o0, n, body, z, 0, z0, z1, z2, z3, outZ, at);
     }
 
     @Override
