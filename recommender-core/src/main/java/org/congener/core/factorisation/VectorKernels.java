@@ -50,15 +50,34 @@ final class VectorKernels implements DenseKernels {
     }
 
     /**
-     * One lane block of {@code out} at a time, held in a register while every row adds its share: the
-     * per-entry operations and their order are axpy's (a fused multiply-add per row on the lanes, a
-     * plain multiply and add on the tail), so the result is the same bits.
+     * Four lane blocks of {@code out} at a time, held in registers while every row adds its share, so
+     * four independent chains of fused multiply-adds are in flight instead of one waiting on itself.
+     * Each entry's operations and their order are still axpy's (a fused multiply-add per row, rows in
+     * order, on the lanes; a plain multiply and add on the tail), so the result is the same bits.
      */
     @Override
     public void accumulateRows(double[] a, int aOff, int rows, int n, double[] s, int sOff, double[] out,
                                int outOff) {
         int lanes = SPECIES.length();
         int t = 0;
+        for (; t + 4 * lanes <= n; t += 4 * lanes) {
+            DoubleVector acc0 = DoubleVector.fromArray(SPECIES, out, outOff + t);
+            DoubleVector acc1 = DoubleVector.fromArray(SPECIES, out, outOff + t + lanes);
+            DoubleVector acc2 = DoubleVector.fromArray(SPECIES, out, outOff + t + 2 * lanes);
+            DoubleVector acc3 = DoubleVector.fromArray(SPECIES, out, outOff + t + 3 * lanes);
+            for (int r = 0; r < rows; r++) {
+                int row = aOff + r * n + t;
+                DoubleVector weight = DoubleVector.broadcast(SPECIES, s[sOff + r]);
+                acc0 = DoubleVector.fromArray(SPECIES, a, row).fma(weight, acc0);
+                acc1 = DoubleVector.fromArray(SPECIES, a, row + lanes).fma(weight, acc1);
+                acc2 = DoubleVector.fromArray(SPECIES, a, row + 2 * lanes).fma(weight, acc2);
+                acc3 = DoubleVector.fromArray(SPECIES, a, row + 3 * lanes).fma(weight, acc3);
+            }
+            acc0.intoArray(out, outOff + t);
+            acc1.intoArray(out, outOff + t + lanes);
+            acc2.intoArray(out, outOff + t + 2 * lanes);
+            acc3.intoArray(out, outOff + t + 3 * lanes);
+        }
         for (; t + lanes <= n; t += lanes) {
             DoubleVector acc = DoubleVector.fromArray(SPECIES, out, outOff + t);
             for (int r = 0; r < rows; r++) {
