@@ -91,15 +91,7 @@ public final class SuggestionsJsonWriter implements Serializer<Suggestions> {
         }
         writeString(out, CAUSED_BY_EVENT_ID, list.causedByEventId());
         writeString(out, GENERATED_AT, list.generatedAt());
-        List<Suggestion> items = list.items();
-        if (items != null) {
-            out.writeFieldName(ITEMS);
-            out.writeStartArray();
-            for (Suggestion item : items) {
-                writeItem(out, item);
-            }
-            out.writeEndArray();
-        }
+        writeList(out, ITEMS, list.items(), SuggestionsJsonWriter::writeItem);
         writeString(out, CAUTION, list.caution());
         out.writeEndObject();
     }
@@ -117,30 +109,16 @@ public final class SuggestionsJsonWriter implements Serializer<Suggestions> {
         writeDouble(out, CF_SCORE, item.cfScore());
         writeDouble(out, SEMANTIC_SCORE, item.semanticScore());
         writeDouble(out, FUSED_SCORE, item.fusedScore());
-        List<Contribution> contributors = item.contributors();
-        if (contributors != null) {
-            out.writeFieldName(CONTRIBUTORS);
-            out.writeStartArray();
-            for (Contribution contribution : contributors) {
-                writeContribution(out, contribution);
-            }
-            out.writeEndArray();
-        }
+        writeList(out, CONTRIBUTORS, item.contributors(), SuggestionsJsonWriter::writeContribution);
         writeString(out, SHARED_TERM_ID, item.sharedTermId());
         writeString(out, SHARED_TERM_NAME, item.sharedTermName());
-        List<String> hazardCodes = item.hazardCodes();
-        if (hazardCodes != null) {
-            out.writeFieldName(HAZARD_CODES);
-            out.writeStartArray();
-            for (String code : hazardCodes) {
-                if (code == null) {
-                    out.writeNull();
-                } else {
-                    out.writeString(code);
-                }
+        writeList(out, HAZARD_CODES, item.hazardCodes(), (generator, code) -> {
+            if (code == null) {
+                generator.writeNull();
+            } else {
+                generator.writeString(code);
             }
-            out.writeEndArray();
-        }
+        });
         out.writeFieldName(IN_STOCK);
         out.writeBoolean(item.inStock());
         out.writeEndObject();
@@ -155,6 +133,26 @@ public final class SuggestionsJsonWriter implements Serializer<Suggestions> {
         writeString(out, COMPOUND_ID, contribution.compoundId());
         writeDouble(out, WEIGHT, contribution.weight());
         out.writeEndObject();
+    }
+
+    /** Writes one element of a list field. */
+    @FunctionalInterface
+    private interface ElementWriter<E> {
+        void write(JsonGenerator out, E element) throws IOException;
+    }
+
+    /** A list field, left out when null; its null elements written as null. */
+    private static <E> void writeList(JsonGenerator out, SerializableString field, List<E> values,
+                                      ElementWriter<E> element) throws IOException {
+        if (values == null) {
+            return;
+        }
+        out.writeFieldName(field);
+        out.writeStartArray();
+        for (E value : values) {
+            element.write(out, value);
+        }
+        out.writeEndArray();
     }
 
     /** A string field, left out when null as the mapper's NON_NULL inclusion leaves it out. */
