@@ -72,9 +72,12 @@ import org.congener.streams.config.AppConfig;
  * from the researchers' actual history sizes), and the ideal rate 1 / (1/ceiling + work/rate). Researchers
  * and compounds are drawn with Zipf skew (a few heavy users, a long tail).
  *
- * <p>Arguments: compounds rank researchers rate(events/s) seconds burstEvents. System properties
- * {@code guarantee}, {@code commit.interval.ms}, {@code scoring.batch.events} and {@code scoring.batch.wait.ms}
- * override the app's defaults for both runs.
+ * <p>Arguments: compounds rank researchers rate(events/s) seconds burstEvents. Any setting of the app
+ * given as a system property of the same name (e.g. {@code -Dcommit.interval.ms=100}), and
+ * {@code guarantee} for {@code processing.guarantee}, overrides the app's default for both runs;
+ * {@code latency.series=FILE} writes the paced run's latencies in the order the events were produced.
+ * Both runs print their commits' count and where a commit's time goes (producer flush, offsets,
+ * transaction commit).
  */
 public final class StreamsEndToEnd {
 
@@ -153,19 +156,23 @@ public final class StreamsEndToEnd {
         System.out.printf("[%s] catalogue, researchers and model v0001 published in %.1f s%n", label,
                 (System.nanoTime() - t0) / 1e9);
 
-        AppConfig config = AppConfig.defaults().with(Map.of(
+        Map<String, String> settings = new java.util.HashMap<>();
+        // any setting of the app can be given as a system property of the same name, for both runs
+        for (String name : AppConfig.DEFINITION.names()) {
+            String value = System.getProperty(name);
+            if (value != null) {
+                settings.put(name, value);
+            }
+        }
+        settings.put(AppConfig.PROCESSING_GUARANTEE, System.getProperty("guarantee",
+                settings.getOrDefault(AppConfig.PROCESSING_GUARANTEE, "exactly_once_v2")));
+        settings.putAll(Map.of(
                 AppConfig.BOOTSTRAP_SERVERS, bootstrap,
                 AppConfig.TOPIC_PREFIX, prefix,
                 AppConfig.APPLICATION_ID, prefix + "bench",
                 AppConfig.STATE_DIR, dir.resolve(prefix + "state").toString(),
-                AppConfig.HTTP_PORT, "0",
-                AppConfig.PROCESSING_GUARANTEE, System.getProperty("guarantee", "exactly_once_v2"),
-                AppConfig.COMMIT_INTERVAL_MS, System.getProperty("commit.interval.ms",
-                        Long.toString(AppConfig.defaults().commitIntervalMs())),
-                AppConfig.BATCH_EVENTS, System.getProperty(AppConfig.BATCH_EVENTS,
-                        Integer.toString(AppConfig.defaults().batchEvents())),
-                AppConfig.BATCH_WAIT_MS, System.getProperty(AppConfig.BATCH_WAIT_MS,
-                        Long.toString(AppConfig.defaults().batchWaitMs()))));
+                AppConfig.HTTP_PORT, "0"));
+        AppConfig config = AppConfig.defaults().with(settings);
         try (StreamsApp app = StreamsApp.start(config, scorer)) {
             if (!app.awaitRunning(Duration.ofMinutes(3))) {
                 throw new IllegalStateException("streams app did not reach RUNNING");
@@ -173,8 +180,10 @@ public final class StreamsEndToEnd {
             awaitLiveModel(app);
             Map<String, Long> producedAt = new ConcurrentHashMap<>();
             List<Long> latenciesNs = java.util.Collections.synchronizedList(new ArrayList<>());
+            // each list's (produced, read) nanoTimes, for a series of the paced run (-Dlatency.series=FILE)
+            List<long[]> series = java.util.Collections.synchronizedList(new ArrayList<>());
             AtomicBoolean stop = new AtomicBoolean();
-            Thread reader = new Thread(() -> readSuggestions(bootstrap, topics, producedAt, latenciesNs, stop));
+            Thread reader = new Thread(() -> readSuggestions(bootstrap, topics, producedAt, latenciesNs, series, stop));
             // a failed run must not leave the JVM waiting on its reader
             reader.setDaemon(true);
             reader.start();
@@ -198,8 +207,10 @@ public final class StreamsEndToEnd {
 
             RunResult paced = null;
             int pacedCount = rate * seconds;
+            Map<String, Double> metricsBefore = commitMetrics(app);
             if (pacedCount > 0) {
                 latenciesNs.clear();
+                series.clear();
                 try (KafkaProducer<String, String> producer = producer(bootstrap)) {
                     long start = System.nanoTime();
                     for (int e = 0; e < pacedCount; e++) {
@@ -218,7 +229,13 @@ public final class StreamsEndToEnd {
                         v[v.length - 1] / 1e6, v.length, 0, 0, 0);
                 System.out.printf(Locale.ROOT, "[%s] paced at %d events/s: %d lists, p50 %.1f ms, p99 %.1f ms, max %.1f ms%n",
                         label, rate, v.length, paced.p50Ms(), paced.p99Ms(), paced.maxMs());
+                printCommits(label + "] [paced", metricsBefore, commitMetrics(app));
+                String seriesFile = System.getProperty("latency.series");
+                if (seriesFile != null) {
+                    writeSeries(Path.of(seriesFile), series);
+                }
             }
+            metricsBefore = commitMetrics(app);
 
             long jitBefore = jitMillis();
             long wallBefore = System.nanoTime();
@@ -230,6 +247,7 @@ public final class StreamsEndToEnd {
             System.out.printf(Locale.ROOT, "[%s] sustained: %d events at %.0f events/s; stream thread CPU %.0f µs per event"
                     + " (%.0f %% busy); JIT compiling %.0f %% of the time%n", label, burst, perSecond, streamCpuPerEventUs,
                     100 * streamCpuPerEventUs * perSecond / 1e6, 100 * jitShare);
+            printCommits(label + "] [burst", metricsBefore, commitMetrics(app));
             stop.set(true);
             reader.join();
             long[] store = scorer == null ? interactionStoreBytes(app) : new long[] {0, 0};
@@ -262,6 +280,59 @@ public final class StreamsEndToEnd {
             throw new IllegalStateException("only " + latenciesNs.size() + " of " + count + " lists arrived");
         }
         return count / secs;
+    }
+
+    /**
+     * Running totals of the clients' commit work: the stream threads' commits (their count and the
+     * longest so far) and the transactional producers' time in flush, offsets-to-transaction and commit.
+     */
+    private static Map<String, Double> commitMetrics(StreamsApp app) {
+        Map<String, Double> totals = new java.util.TreeMap<>();
+        for (var e : app.kafkaStreams().metrics().entrySet()) {
+            var name = e.getKey();
+            Object value = e.getValue().metricValue();
+            if (!(value instanceof Number number) || Double.isNaN(number.doubleValue())) {
+                continue;
+            }
+            boolean thread = name.group().equals("stream-thread-metrics");
+            boolean producer = name.group().equals("producer-metrics");
+            if ((thread && (name.name().equals("commit-total") || name.name().equals("commit-latency-max")))
+                    || (producer && (name.name().equals("txn-commit-time-ns-total")
+                    || name.name().equals("txn-send-offsets-time-ns-total") || name.name().equals("flush-time-ns-total")
+                    || name.name().equals("txn-begin-time-ns-total")))) {
+                totals.merge(name.name(), number.doubleValue(), Double::sum);
+            }
+        }
+        return totals;
+    }
+
+    private static void printCommits(String label, Map<String, Double> before, Map<String, Double> after) {
+        double commits = after.getOrDefault("commit-total", 0.0) - before.getOrDefault("commit-total", 0.0);
+        if (commits <= 0) {
+            return;
+        }
+        java.util.function.ToDoubleFunction<String> msPerCommit = key ->
+                (after.getOrDefault(key, 0.0) - before.getOrDefault(key, 0.0)) / 1e6 / commits;
+        System.out.printf(Locale.ROOT, "[%s] %.0f commits; per commit: producer flush %.2f ms, offsets to"
+                        + " transaction %.2f ms, transaction commit %.2f ms; longest commit so far %.1f ms%n", label, commits,
+                msPerCommit.applyAsDouble("flush-time-ns-total"), msPerCommit.applyAsDouble("txn-send-offsets-time-ns-total"),
+                msPerCommit.applyAsDouble("txn-commit-time-ns-total"), after.getOrDefault("commit-latency-max", 0.0));
+    }
+
+    /** One line per list, by time produced: ms since the first event was produced, and the latency in ms. */
+    private static void writeSeries(Path file, List<long[]> series) throws java.io.IOException {
+        List<long[]> byProduced;
+        synchronized (series) {
+            byProduced = new ArrayList<>(series);
+        }
+        byProduced.sort(java.util.Comparator.comparingLong(pair -> pair[0]));
+        long first = byProduced.isEmpty() ? 0 : byProduced.get(0)[0];
+        try (var out = Files.newBufferedWriter(file)) {
+            out.write("produced_ms,latency_ms\n");
+            for (long[] pair : byProduced) {
+                out.write(String.format(Locale.ROOT, "%.3f,%.3f%n", (pair[0] - first) / 1e6, (pair[1] - pair[0]) / 1e6));
+            }
+        }
     }
 
     /** CPU time so far of the app's stream threads (named after its application id). */
@@ -397,7 +468,7 @@ public final class StreamsEndToEnd {
     }
 
     private static void readSuggestions(String bootstrap, Topics topics, Map<String, Long> producedAt,
-                                        List<Long> latencies, AtomicBoolean stop) {
+                                        List<Long> latencies, List<long[]> series, AtomicBoolean stop) {
         Properties p = new Properties();
         p.put(ConsumerConfig.BOOTSTRAP_SERVERS_CONFIG, bootstrap);
         p.put(ConsumerConfig.ISOLATION_LEVEL_CONFIG, "read_committed");
@@ -416,6 +487,7 @@ public final class StreamsEndToEnd {
                     Long at = cause == null ? null : producedAt.remove(cause);
                     if (at != null) {
                         latencies.add(now - at);
+                        series.add(new long[] {at, now});
                     }
                 }
             }

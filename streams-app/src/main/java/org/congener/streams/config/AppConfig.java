@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Map;
 
 import org.apache.kafka.clients.consumer.ConsumerConfig;
+import org.apache.kafka.clients.producer.ProducerConfig;
 import org.apache.kafka.common.config.AbstractConfig;
 import org.apache.kafka.common.config.ConfigDef;
 import org.apache.kafka.common.config.ConfigDef.Importance;
@@ -29,6 +30,7 @@ public final class AppConfig extends AbstractConfig {
     public static final String PROCESSING_GUARANTEE = "processing.guarantee";
     public static final String STREAM_THREADS = "num.stream.threads";
     public static final String COMMIT_INTERVAL_MS = "commit.interval.ms";
+    public static final String PRODUCER_LINGER_MS = "producer.linger.ms";
     public static final String HTTP_HOST = "http.host";
     public static final String HTTP_PORT = "http.port";
     public static final String HTTP_ADVERTISED_ADDRESS = "http.advertised.address";
@@ -64,9 +66,15 @@ public final class AppConfig extends AbstractConfig {
                             + " transaction log has replication 1) or at_least_once.")
             .define(STREAM_THREADS, Type.INT, 1, Range.between(1, 64), Importance.MEDIUM,
                     "Stream threads in this instance; more than the input partitions leaves threads idle.")
-            .define(COMMIT_INTERVAL_MS, Type.LONG, 100L, Range.between(1L, 600_000L), Importance.LOW,
+            .define(COMMIT_INTERVAL_MS, Type.LONG, 25L, Range.between(1L, 600_000L), Importance.LOW,
                     "How often processing progress is committed, in milliseconds; under exactly-once it is"
-                            + " also how long a suggestion may wait before readers see it.")
+                            + " also how long a suggestion may wait before readers see it. A task commits only"
+                            + " when it has processed something, so a quiet app does not commit at all.")
+            .define(PRODUCER_LINGER_MS, Type.INT, 5, Range.between(0, 1_000), Importance.LOW,
+                    "How long, in milliseconds, the stream threads' producer waits to fill a batch before"
+                            + " sending it (Kafka Streams' own default is 100). Under exactly-once every commit"
+                            + " first waits for all records not yet sent; a short wait sends them while the next"
+                            + " events are processed, which keeps each commit short.")
             .define(HTTP_HOST, Type.STRING, "127.0.0.1", new ConfigDef.NonEmptyString(), Importance.MEDIUM,
                     "Address the query API listens on. Keep 127.0.0.1 unless a proxy in front of it"
                             + " handles access control.")
@@ -124,6 +132,10 @@ public final class AppConfig extends AbstractConfig {
 
     public String applicationId() {
         return getString(APPLICATION_ID);
+    }
+
+    public int producerLingerMs() {
+        return getInt(PRODUCER_LINGER_MS);
     }
 
     public Path stateDir() {
@@ -199,6 +211,7 @@ public final class AppConfig extends AbstractConfig {
         p.put(StreamsConfig.NUM_STREAM_THREADS_CONFIG, streamThreads());
         p.put(StreamsConfig.COMMIT_INTERVAL_MS_CONFIG, commitIntervalMs());
         p.put(StreamsConfig.consumerPrefix(ConsumerConfig.FETCH_MAX_WAIT_MS_CONFIG), 50);
+        p.put(StreamsConfig.producerPrefix(ProducerConfig.LINGER_MS_CONFIG), producerLingerMs());
         p.put(StreamsConfig.DESERIALIZATION_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringDeserializationHandler.class);
         p.put(StreamsConfig.PROCESSING_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringProcessingHandler.class);
         p.put(DeadLetteringDeserializationHandler.TOPIC_PREFIX_CONFIG, topicPrefix());
