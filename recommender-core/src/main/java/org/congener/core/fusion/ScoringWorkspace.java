@@ -104,18 +104,26 @@ public final class ScoringWorkspace {
             sortedStrengths = new double[capacity];
             itemAndPosition = new long[capacity];
         }
+        boolean ascending = true;
         for (int p = 0; p < n; p++) {
             int item = items[p];
             if (item < 0 || item >= itemCount()) {
                 throw new IllegalArgumentException("item " + item + " is outside 0.." + (itemCount() - 1));
             }
+            ascending &= p == 0 || items[p - 1] < item;
             itemAndPosition[p] = ((long) item << 32) | p;
         }
-        java.util.Arrays.sort(itemAndPosition, 0, n);
-        for (int p = 0; p < n; p++) {
-            int from = (int) itemAndPosition[p];
-            sortedItems[p] = items[from];
-            sortedStrengths[p] = strengths[from];
+        // a caller that keeps its items in order (the stream's rows, fold-in and scoring alike) is not sorted again
+        if (ascending) {
+            System.arraycopy(items, 0, sortedItems, 0, n);
+            System.arraycopy(strengths, 0, sortedStrengths, 0, n);
+        } else {
+            java.util.Arrays.sort(itemAndPosition, 0, n);
+            for (int p = 0; p < n; p++) {
+                int from = (int) itemAndPosition[p];
+                sortedItems[p] = items[from];
+                sortedStrengths[p] = strengths[from];
+            }
         }
         researcherItems = n;
     }

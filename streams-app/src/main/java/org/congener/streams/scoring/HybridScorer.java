@@ -127,7 +127,7 @@ public final class HybridScorer implements SuggestionScorer {
     private List<ScoredCandidate> ranked(Folded event, ScoringWorkspace ws, int n) {
         LiveModel model = event.input().model();
         int[] top = eligibleTop(ws, n, i -> event.input().eligible().eligible(model.compoundId(i)));
-        List<List<Contribution>> reasons = contributors(model.neighbours(), model::compoundId, event.row().items, top,
+        List<List<Contribution>> reasons = contributors(model.neighbours(), model::compoundId, event.row().history, top,
                 candidateSlots(model.itemCount()));
         List<ScoredCandidate> ranked = new ArrayList<>(top.length);
         for (int t = 0; t < top.length; t++) {
@@ -261,24 +261,42 @@ public final class HybridScorer implements SuggestionScorer {
         return slots;
     }
 
-    /** The researcher's interactions in the model's index; compounds the version does not know drop out. */
-    private record Row(int[] items, double[] strengths) {
+    /**
+     * The researcher's interactions in the model's index, in index order (the order the scorer sums
+     * them in, so its fold-in and its scoring need not sort them again); compounds the version does not
+     * know drop out. {@code history} holds the same items in the profile's order, which the reasons'
+     * ties follow.
+     */
+    private record Row(int[] items, double[] strengths, int[] history) {
         /** Strengths read at {@code atEpochMs}, the triggering event's time, under the version's half-life. */
         static Row of(InteractionProfile profile, LiveModel model, long atEpochMs) {
-            int[] items = new int[profile.size()];
-            double[] strengths = new double[profile.size()];
+            double[] byEntry = new double[profile.size()];
+            long[] itemAndEntry = new long[profile.size()];
             var halfLife = model.settings().weights().halfLife();
             double halfLifeMs = halfLife == null ? 0 : halfLife.toMillis();
             int n = 0;
+            int entry = 0;
             for (InteractionProfile.Entry e : profile.entries()) {
                 int i = model.indexOf(e.compoundId());
                 double strength = InteractionProfile.strengthAt(e, atEpochMs, halfLifeMs);
                 if (i >= 0 && strength > 0) {
-                    items[n] = i;
-                    strengths[n++] = strength;
+                    byEntry[entry] = strength;
+                    itemAndEntry[n++] = ((long) i << 32) | entry;
                 }
+                entry++;
             }
-            return new Row(java.util.Arrays.copyOf(items, n), java.util.Arrays.copyOf(strengths, n));
+            int[] history = new int[n];
+            for (int p = 0; p < n; p++) {
+                history[p] = (int) (itemAndEntry[p] >>> 32);
+            }
+            java.util.Arrays.sort(itemAndEntry, 0, n);
+            int[] items = new int[n];
+            double[] strengths = new double[n];
+            for (int p = 0; p < n; p++) {
+                items[p] = (int) (itemAndEntry[p] >>> 32);
+                strengths[p] = byEntry[(int) itemAndEntry[p]];
+            }
+            return new Row(items, strengths, history);
         }
     }
 }
