@@ -35,6 +35,41 @@ public interface DenseKernels {
         }
     }
 
+    /**
+     * out[outOff+t] += Σ_r w[wOff+r]·(a_r·d)·a[aOff+r·n+t] for t &lt; n, with a_r the r-th row of the
+     * row-major block and d read from {@code d[dOff..dOff+n)}; returns Σ_t d[dOff+t]·out[outOff+t]
+     * after the update. This is Aᵀ·diag(w)·A·d added to out, the data term of a conjugate-gradient
+     * product, and d·out, the curvature the step length needs. Each row's dot product and update are
+     * taken together so the block is read from memory once, not once for the dot products and once
+     * for the updates. The summation order is the implementation's own. Modifies {@code out}.
+     */
+    default double accumulateProjections(double[] a, int aOff, int rows, int n, double[] w, int wOff, double[] d,
+                                         int dOff, double[] out, int outOff) {
+        for (int r = 0; r < rows; r++) {
+            int row = aOff + r * n;
+            axpy(w[wOff + r] * dot(a, row, d, dOff, n), a, row, out, outOff, n);
+        }
+        return dot(d, dOff, out, outOff, n);
+    }
+
+    /**
+     * The updates of a conjugate-gradient step of length alpha along d, whose product with the system
+     * is ad: x[xOff+t] += alpha·d[t] and r[t] −= alpha·ad[t] for t &lt; n; returns Σ_t r[t]², the new
+     * squared residual. Modifies {@code x} and {@code r}.
+     */
+    default double stepAlong(double alpha, double[] d, double[] ad, double[] x, int xOff, double[] r, int n) {
+        axpy(alpha, d, 0, x, xOff, n);
+        axpy(-alpha, ad, 0, r, 0, n);
+        return dot(r, 0, r, 0, n);
+    }
+
+    /** y[t] = x[t] + beta·y[t] for t &lt; n (the next search direction from the residual); modifies {@code y}. */
+    default void scaleAndAdd(double beta, double[] x, double[] y, int n) {
+        for (int t = 0; t < n; t++) {
+            y[t] = x[t] + beta * y[t];
+        }
+    }
+
     /** Rows widened per block by {@link #multiply(float[], int, int, int, double[], int, double[], int, double[])}. */
     int WIDEN_BLOCK_ROWS = 32;
 

@@ -117,13 +117,19 @@ public final class FoldIn {
             }
         }
         int k = rank();
-        double[] y = fixed.factors().data();
-        // ‖b‖, b = YᵀC_u p(u) = Σ_{i∈I_u} c_ui y_i: the scale the residual is measured against
-        double[] b = ws.product;
-        java.util.Arrays.fill(b, 0.0);
-        for (int p = 0; p < items.length; p++) {
-            kernels.axpy(config.confidenceOf(strengths[p]), y, items[p] * k, b, 0, k);
+        int n = items.length;
+        double[] rows = ws.gather(fixed.factors().data(), items, 0, n, k);
+        double[] confidence = ws.coefficients;
+        double[] weights = ws.weights;
+        for (int p = 0; p < n; p++) {
+            double c = config.confidenceOf(strengths[p]);
+            confidence[p] = c;
+            weights[p] = c - 1.0;
         }
+        // b = YᵀC_u p(u) = Σ_{i∈I_u} c_ui y_i, and ‖b‖, the scale the residual is measured against
+        double[] b = ws.target;
+        java.util.Arrays.fill(b, 0.0);
+        kernels.accumulateRows(rows, 0, n, k, confidence, 0, b, 0);
         double bb = kernels.dot(b, 0, b, 0, k);
         if (bb == 0.0) {
             // b = 0 and the system is positive definite: x = 0
@@ -132,12 +138,65 @@ public final class FoldIn {
         }
         double stopBelow = CONVERGED_RELATIVE_RESIDUAL * CONVERGED_RELATIVE_RESIDUAL * bb;
         int cap = convergedStepCap();
-        int steps = conjugateGradient(items, strengths, 0, items.length, x, 0, cap, stopBelow, true, ws);
+        double lambda = config.regularisation().effectiveLambda(config.lambda(), n);
+        int steps = convergedConjugateGradient(n, lambda, x, start == null, cap, stopBelow, ws);
         if (steps == cap && ws.lastResidualSquared > stopBelow) {
             throw new NoConvergenceException("fold-in CG left ‖r‖/‖b‖ = "
                     + Math.sqrt(ws.lastResidualSquared / bb) + " after " + cap + " steps");
         }
         return steps;
+    }
+
+    /**
+     * CG on A x = b of eq. (4) from the start held in x (zero when {@code fromZero}), the gathered rows,
+     * weights c_ui − 1 and b already in the workspace, until ‖r‖² ≤ {@code stopBelow} or {@code maxSteps}
+     * steps; returns the steps taken and leaves ‖r‖² in the workspace. Takács, Pilászy &amp; Tikk 2011,
+     * Algorithm 2: r = b − Ax, d = r; per step α = r·r / d·Ad, x += αd, r −= αAd, d = r_new + (r_new·r_new
+     * / r·r) d. Each step is one {@link #systemProduct} and two length-k passes.
+     */
+    private int convergedConjugateGradient(int n, double lambda, double[] x, boolean fromZero, int maxSteps,
+                                           double stopBelow, Workspace ws) {
+        int k = rank();
+        double[] b = ws.target;
+        double[] r = ws.residual;
+        double[] dir = ws.direction;
+        double[] ad = ws.product;
+        if (fromZero) {
+            System.arraycopy(b, 0, r, 0, k);
+        } else {
+            systemProduct(x, n, lambda, ad, ws);
+            for (int f = 0; f < k; f++) {
+                r[f] = b[f] - ad[f];
+            }
+        }
+        System.arraycopy(r, 0, dir, 0, k);
+        double rr = kernels.dot(r, 0, r, 0, k);
+        int s = 0;
+        for (; s < maxSteps && rr > stopBelow; s++) {
+            double curvature = systemProduct(dir, n, lambda, ad, ws);
+            if (!(curvature > 0)) {
+                throw new NotPositiveDefiniteException("fold-in system has d·Ad = " + curvature + " (λ = " + lambda + ")");
+            }
+            double rrNew = kernels.stepAlong(rr / curvature, dir, ad, x, 0, r, k);
+            kernels.scaleAndAdd(rrNew / rr, r, dir, k);
+            rr = rrNew;
+        }
+        ws.lastResidualSquared = rr;
+        return s;
+    }
+
+    /**
+     * out = A v = (YᵀY + λI) v + Σ_{i∈I_u} (c_ui − 1)(y_i·v) y_i over the gathered rows and weights, in
+     * k² + 2·n_u·k multiply-adds without forming A; returns v·Av. YᵀY is symmetric, so its rows weighted
+     * by the entries of v add up to YᵀY v with no dot products.
+     */
+    private double systemProduct(double[] v, int n, double lambda, double[] out, Workspace ws) {
+        int k = rank();
+        for (int f = 0; f < k; f++) {
+            out[f] = lambda * v[f];
+        }
+        kernels.accumulateRows(fixed.gram(), 0, k, k, v, 0, out, 0);
+        return kernels.accumulateProjections(ws.rows, 0, n, k, ws.weights, 0, v, 0, out, 0);
     }
 
     private void checkVector(String name, double[] v) {
@@ -211,18 +270,18 @@ public final class FoldIn {
 
     void solveConjugateGradient(int[] cols, double[] vals, int from, int to, double[] x, int xOff, int steps,
                                 Workspace ws) {
-        conjugateGradient(cols, vals, from, to, x, xOff, steps, 1e-20, false, ws);
+        conjugateGradient(cols, vals, from, to, x, xOff, steps, 1e-20, ws);
     }
 
     /**
-     * At most {@code maxSteps} CG steps on the system A x = b of eq. (4) from the start held in x,
-     * stopping once ‖r‖² ≤ {@code stopBelow}; returns the steps taken and leaves ‖r‖² in the workspace.
+     * The trainer's CG: at most {@code maxSteps} steps on the system A x = b of eq. (4) from the start
+     * held in x, stopping once ‖r‖² ≤ {@code stopBelow}; returns the steps taken.
      * A·d = (YᵀY + λI)d + Σ_{i∈I_u} (c_ui − 1)(y_i·d) y_i, so each step costs k² + 2·n_u·k
-     * multiply-adds and the system is never formed. With {@code requirePositiveCurvature} a direction
-     * with d·Ad ≤ 0 throws; the trainer's fixed steps keep their old arithmetic without the check.
+     * multiply-adds and the system is never formed. Its sums are kept as they were, so trained factors
+     * do not change; {@link #convergedConjugateGradient} is the stream's faster version.
      */
     private int conjugateGradient(int[] cols, double[] vals, int from, int to, double[] x, int xOff, int maxSteps,
-                                  double stopBelow, boolean requirePositiveCurvature, Workspace ws) {
+                                  double stopBelow, Workspace ws) {
         int k = rank();
         int n = to - from;
         double lambda = config.regularisation().effectiveLambda(config.lambda(), n);
@@ -256,9 +315,6 @@ public final class FoldIn {
             }
             kernels.accumulateRows(rows, 0, n, k, coef, 0, ad, 0);
             double curvature = kernels.dot(dir, 0, ad, 0, k);
-            if (requirePositiveCurvature && !(curvature > 0)) {
-                throw new NotPositiveDefiniteException("fold-in system has d·Ad = " + curvature + " (λ = " + lambda + ")");
-            }
             double step = rr / curvature;
             kernels.axpy(step, dir, 0, x, xOff, k);
             kernels.axpy(-step, ad, 0, r, 0, k);
@@ -269,7 +325,6 @@ public final class FoldIn {
             }
             rr = rrNew;
         }
-        ws.lastResidualSquared = rr;
         return s;
     }
 
@@ -291,12 +346,16 @@ public final class FoldIn {
         final double[] residual;
         final double[] direction;
         final double[] product;
+        /** b = YᵀC_u p(u) of the converged fold-in. */
+        final double[] target;
         double lastResidualSquared;
         /** The rows y_i of the items being solved for, side by side; grown to the longest history seen. */
         double[] rows = new double[0];
-        /** Per item: y_i·v for the current v, and the weight of y_i in the update. */
+        /** Per item: y_i·v for the current v, and the weight of y_i in an update (c_ui when forming b). */
         double[] along = new double[0];
         double[] coefficients = new double[0];
+        /** Per item: c_ui − 1, the weight of y_i y_iᵀ in the system of the converged fold-in. */
+        double[] weights = new double[0];
 
         public Workspace(int k) {
             system = new DMatrixRMaj(k, k);
@@ -306,6 +365,7 @@ public final class FoldIn {
             residual = new double[k];
             direction = new double[k];
             product = new double[k];
+            target = new double[k];
         }
 
         public int rank() {
@@ -320,6 +380,7 @@ public final class FoldIn {
                 rows = new double[capacity * k];
                 along = new double[capacity];
                 coefficients = new double[capacity];
+                weights = new double[capacity];
             }
             for (int p = 0; p < n; p++) {
                 System.arraycopy(y, cols[from + p] * k, rows, p * k, k);

@@ -53,12 +53,17 @@ final class VectorKernels implements DenseKernels {
      * Four lane blocks of {@code out} at a time, held in registers while every row adds its share, so
      * four independent chains of fused multiply-adds are in flight instead of one waiting on itself.
      * Each entry's operations and their order are still axpy's (a fused multiply-add per row, rows in
-     * order, on the lanes; a plain multiply and add on the tail), so the result is the same bits.
+     * order, on the lanes; a plain multiply and add on the tail), so the result is the same bits. A row
+     * of exactly eight lane blocks takes all eight at once.
      */
     @Override
     public void accumulateRows(double[] a, int aOff, int rows, int n, double[] s, int sOff, double[] out,
                                int outOff) {
         int lanes = SPECIES.length();
+        if (n == 8 * lanes) {
+            accumulateRowsEightBlocks(a, aOff, rows, s, sOff, out, outOff);
+            return;
+        }
         int t = 0;
         for (; t + 4 * lanes <= n; t += 4 * lanes) {
             DoubleVector acc0 = DoubleVector.fromArray(SPECIES, out, outOff + t);
@@ -92,6 +97,207 @@ final class VectorKernels implements DenseKernels {
                 sum += s[sOff + r] * a[aOff + r * n + t];
             }
             out[outOff + t] = sum;
+        }
+    }
+
+    /**
+     * A row of eight lane blocks (k = 64 at eight lanes) in one pass: eight accumulator chains keep both
+     * multiply-add pipes busy where four would wait on their own latency, and each row is read once.
+     * Each entry still sees axpy's fused multiply-adds in row order, so the bits are the same.
+     */
+    private static void accumulateRowsEightBlocks(double[] a, int aOff, int rows, double[] s, int sOff, double[] out,
+                                                  int outOff) {
+        int lanes = SPECIES.length();
+        int n = 8 * lanes;
+        DoubleVector acc0 = DoubleVector.fromArray(SPECIES, out, outOff);
+        DoubleVector acc1 = DoubleVector.fromArray(SPECIES, out, outOff + lanes);
+        DoubleVector acc2 = DoubleVector.fromArray(SPECIES, out, outOff + 2 * lanes);
+        DoubleVector acc3 = DoubleVector.fromArray(SPECIES, out, outOff + 3 * lanes);
+        DoubleVector acc4 = DoubleVector.fromArray(SPECIES, out, outOff + 4 * lanes);
+        DoubleVector acc5 = DoubleVector.fromArray(SPECIES, out, outOff + 5 * lanes);
+        DoubleVector acc6 = DoubleVector.fromArray(SPECIES, out, outOff + 6 * lanes);
+        DoubleVector acc7 = DoubleVector.fromArray(SPECIES, out, outOff + 7 * lanes);
+        for (int r = 0; r < rows; r++) {
+            int row = aOff + r * n;
+            DoubleVector weight = DoubleVector.broadcast(SPECIES, s[sOff + r]);
+            acc0 = DoubleVector.fromArray(SPECIES, a, row).fma(weight, acc0);
+            acc1 = DoubleVector.fromArray(SPECIES, a, row + lanes).fma(weight, acc1);
+            acc2 = DoubleVector.fromArray(SPECIES, a, row + 2 * lanes).fma(weight, acc2);
+            acc3 = DoubleVector.fromArray(SPECIES, a, row + 3 * lanes).fma(weight, acc3);
+            acc4 = DoubleVector.fromArray(SPECIES, a, row + 4 * lanes).fma(weight, acc4);
+            acc5 = DoubleVector.fromArray(SPECIES, a, row + 5 * lanes).fma(weight, acc5);
+            acc6 = DoubleVector.fromArray(SPECIES, a, row + 6 * lanes).fma(weight, acc6);
+            acc7 = DoubleVector.fromArray(SPECIES, a, row + 7 * lanes).fma(weight, acc7);
+        }
+        acc0.intoArray(out, outOff);
+        acc1.intoArray(out, outOff + lanes);
+        acc2.intoArray(out, outOff + 2 * lanes);
+        acc3.intoArray(out, outOff + 3 * lanes);
+        acc4.intoArray(out, outOff + 4 * lanes);
+        acc5.intoArray(out, outOff + 5 * lanes);
+        acc6.intoArray(out, outOff + 6 * lanes);
+        acc7.intoArray(out, outOff + 7 * lanes);
+    }
+
+    /**
+     * When a row is eight or four lane blocks long (k = 64 or 32 at eight lanes), d and the
+     * accumulated out stay in registers for the whole block and each row is loaded once: its dot with
+     * d, then its update from the same registers. The Vector API cannot keep an array of vectors in
+     * registers, hence one method per length with named vectors. Other lengths take each row's dot and
+     * axpy in turn, the row still in cache for the second.
+     */
+    @Override
+    public double accumulateProjections(double[] a, int aOff, int rows, int n, double[] w, int wOff, double[] d,
+                                        int dOff, double[] out, int outOff) {
+        int lanes = SPECIES.length();
+        if (n == 8 * lanes) {
+            return projectionsEightBlocks(a, aOff, rows, w, wOff, d, dOff, out, outOff);
+        }
+        if (n == 4 * lanes) {
+            return projectionsFourBlocks(a, aOff, rows, w, wOff, d, dOff, out, outOff);
+        }
+        return DenseKernels.super.accumulateProjections(a, aOff, rows, n, w, wOff, d, dOff, out, outOff);
+    }
+
+    private static double projectionsEightBlocks(double[] a, int aOff, int rows, double[] w, int wOff, double[] d,
+                                                 int dOff, double[] out, int outOff) {
+        int lanes = SPECIES.length();
+        int n = 8 * lanes;
+        DoubleVector d0 = DoubleVector.fromArray(SPECIES, d, dOff);
+        DoubleVector d1 = DoubleVector.fromArray(SPECIES, d, dOff + lanes);
+        DoubleVector d2 = DoubleVector.fromArray(SPECIES, d, dOff + 2 * lanes);
+        DoubleVector d3 = DoubleVector.fromArray(SPECIES, d, dOff + 3 * lanes);
+        DoubleVector d4 = DoubleVector.fromArray(SPECIES, d, dOff + 4 * lanes);
+        DoubleVector d5 = DoubleVector.fromArray(SPECIES, d, dOff + 5 * lanes);
+        DoubleVector d6 = DoubleVector.fromArray(SPECIES, d, dOff + 6 * lanes);
+        DoubleVector d7 = DoubleVector.fromArray(SPECIES, d, dOff + 7 * lanes);
+        DoubleVector o0 = DoubleVector.fromArray(SPECIES, out, outOff);
+        DoubleVector o1 = DoubleVector.fromArray(SPECIES, out, outOff + lanes);
+        DoubleVector o2 = DoubleVector.fromArray(SPECIES, out, outOff + 2 * lanes);
+        DoubleVector o3 = DoubleVector.fromArray(SPECIES, out, outOff + 3 * lanes);
+        DoubleVector o4 = DoubleVector.fromArray(SPECIES, out, outOff + 4 * lanes);
+        DoubleVector o5 = DoubleVector.fromArray(SPECIES, out, outOff + 5 * lanes);
+        DoubleVector o6 = DoubleVector.fromArray(SPECIES, out, outOff + 6 * lanes);
+        DoubleVector o7 = DoubleVector.fromArray(SPECIES, out, outOff + 7 * lanes);
+        for (int r = 0; r < rows; r++) {
+            int row = aOff + r * n;
+            DoubleVector y0 = DoubleVector.fromArray(SPECIES, a, row);
+            DoubleVector y1 = DoubleVector.fromArray(SPECIES, a, row + lanes);
+            DoubleVector y2 = DoubleVector.fromArray(SPECIES, a, row + 2 * lanes);
+            DoubleVector y3 = DoubleVector.fromArray(SPECIES, a, row + 3 * lanes);
+            DoubleVector y4 = DoubleVector.fromArray(SPECIES, a, row + 4 * lanes);
+            DoubleVector y5 = DoubleVector.fromArray(SPECIES, a, row + 5 * lanes);
+            DoubleVector y6 = DoubleVector.fromArray(SPECIES, a, row + 6 * lanes);
+            DoubleVector y7 = DoubleVector.fromArray(SPECIES, a, row + 7 * lanes);
+            // two chains of four, so the dot's latency is half that of one chain of eight
+            DoubleVector even = y0.mul(d0);
+            DoubleVector odd = y1.mul(d1);
+            even = y2.fma(d2, even);
+            odd = y3.fma(d3, odd);
+            even = y4.fma(d4, even);
+            odd = y5.fma(d5, odd);
+            even = y6.fma(d6, even);
+            odd = y7.fma(d7, odd);
+            double along = even.add(odd).reduceLanes(VectorOperators.ADD);
+            DoubleVector weight = DoubleVector.broadcast(SPECIES, w[wOff + r] * along);
+            o0 = y0.fma(weight, o0);
+            o1 = y1.fma(weight, o1);
+            o2 = y2.fma(weight, o2);
+            o3 = y3.fma(weight, o3);
+            o4 = y4.fma(weight, o4);
+            o5 = y5.fma(weight, o5);
+            o6 = y6.fma(weight, o6);
+            o7 = y7.fma(weight, o7);
+        }
+        o0.intoArray(out, outOff);
+        o1.intoArray(out, outOff + lanes);
+        o2.intoArray(out, outOff + 2 * lanes);
+        o3.intoArray(out, outOff + 3 * lanes);
+        o4.intoArray(out, outOff + 4 * lanes);
+        o5.intoArray(out, outOff + 5 * lanes);
+        o6.intoArray(out, outOff + 6 * lanes);
+        o7.intoArray(out, outOff + 7 * lanes);
+        DoubleVector even = o0.mul(d0);
+        DoubleVector odd = o1.mul(d1);
+        even = o2.fma(d2, even);
+        odd = o3.fma(d3, odd);
+        even = o4.fma(d4, even);
+        odd = o5.fma(d5, odd);
+        even = o6.fma(d6, even);
+        odd = o7.fma(d7, odd);
+        return even.add(odd).reduceLanes(VectorOperators.ADD);
+    }
+
+    private static double projectionsFourBlocks(double[] a, int aOff, int rows, double[] w, int wOff, double[] d,
+                                                int dOff, double[] out, int outOff) {
+        int lanes = SPECIES.length();
+        int n = 4 * lanes;
+        DoubleVector d0 = DoubleVector.fromArray(SPECIES, d, dOff);
+        DoubleVector d1 = DoubleVector.fromArray(SPECIES, d, dOff + lanes);
+        DoubleVector d2 = DoubleVector.fromArray(SPECIES, d, dOff + 2 * lanes);
+        DoubleVector d3 = DoubleVector.fromArray(SPECIES, d, dOff + 3 * lanes);
+        DoubleVector o0 = DoubleVector.fromArray(SPECIES, out, outOff);
+        DoubleVector o1 = DoubleVector.fromArray(SPECIES, out, outOff + lanes);
+        DoubleVector o2 = DoubleVector.fromArray(SPECIES, out, outOff + 2 * lanes);
+        DoubleVector o3 = DoubleVector.fromArray(SPECIES, out, outOff + 3 * lanes);
+        for (int r = 0; r < rows; r++) {
+            int row = aOff + r * n;
+            DoubleVector y0 = DoubleVector.fromArray(SPECIES, a, row);
+            DoubleVector y1 = DoubleVector.fromArray(SPECIES, a, row + lanes);
+            DoubleVector y2 = DoubleVector.fromArray(SPECIES, a, row + 2 * lanes);
+            DoubleVector y3 = DoubleVector.fromArray(SPECIES, a, row + 3 * lanes);
+            DoubleVector even = y2.fma(d2, y0.mul(d0));
+            DoubleVector odd = y3.fma(d3, y1.mul(d1));
+            double along = even.add(odd).reduceLanes(VectorOperators.ADD);
+            DoubleVector weight = DoubleVector.broadcast(SPECIES, w[wOff + r] * along);
+            o0 = y0.fma(weight, o0);
+            o1 = y1.fma(weight, o1);
+            o2 = y2.fma(weight, o2);
+            o3 = y3.fma(weight, o3);
+        }
+        o0.intoArray(out, outOff);
+        o1.intoArray(out, outOff + lanes);
+        o2.intoArray(out, outOff + 2 * lanes);
+        o3.intoArray(out, outOff + 3 * lanes);
+        DoubleVector even = o2.fma(d2, o0.mul(d0));
+        DoubleVector odd = o3.fma(d3, o1.mul(d1));
+        return even.add(odd).reduceLanes(VectorOperators.ADD);
+    }
+
+    /** The two updates and the new residual's squared length in one pass over the lanes. */
+    @Override
+    public double stepAlong(double alpha, double[] d, double[] ad, double[] x, int xOff, double[] r, int n) {
+        int lanes = SPECIES.length();
+        DoubleVector forward = DoubleVector.broadcast(SPECIES, alpha);
+        DoubleVector back = DoubleVector.broadcast(SPECIES, -alpha);
+        DoubleVector squares = DoubleVector.zero(SPECIES);
+        int t = 0;
+        for (; t + lanes <= n; t += lanes) {
+            DoubleVector vx = DoubleVector.fromArray(SPECIES, x, xOff + t);
+            DoubleVector.fromArray(SPECIES, d, t).fma(forward, vx).intoArray(x, xOff + t);
+            DoubleVector vr = DoubleVector.fromArray(SPECIES, ad, t).fma(back, DoubleVector.fromArray(SPECIES, r, t));
+            vr.intoArray(r, t);
+            squares = vr.fma(vr, squares);
+        }
+        double rr = squares.reduceLanes(VectorOperators.ADD);
+        for (; t < n; t++) {
+            x[xOff + t] += alpha * d[t];
+            r[t] -= alpha * ad[t];
+            rr += r[t] * r[t];
+        }
+        return rr;
+    }
+
+    @Override
+    public void scaleAndAdd(double beta, double[] x, double[] y, int n) {
+        int lanes = SPECIES.length();
+        DoubleVector scale = DoubleVector.broadcast(SPECIES, beta);
+        int t = 0;
+        for (; t + lanes <= n; t += lanes) {
+            DoubleVector.fromArray(SPECIES, y, t).fma(scale, DoubleVector.fromArray(SPECIES, x, t)).intoArray(y, t);
+        }
+        for (; t < n; t++) {
+            y[t] = x[t] + beta * y[t];
         }
     }
 

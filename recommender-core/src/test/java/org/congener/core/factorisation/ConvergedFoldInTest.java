@@ -128,6 +128,41 @@ class ConvergedFoldInTest {
         assertTrue(warmSteps < coldSteps, "warm " + warmSteps + " steps, cold " + coldSteps);
     }
 
+    static Stream<Arguments> randomSizes() {
+        // k = 64 and 32 take the vector kernel's eight- and four-block paths at eight lanes, 13 the general one
+        return Stream.of(Arguments.of(64, 200), Arguments.of(64, 20), Arguments.of(64, 1), Arguments.of(32, 77),
+                Arguments.of(13, 50));
+    }
+
+    @ParameterizedTest
+    @MethodSource("randomSizes")
+    void shouldReachTheCholeskySolutionOnRandomFactorsWithEitherKernels(int rank, int history) {
+        FactorMatrix y = FactorMatrix.random(2000, rank, 5L);
+        SplittableRandom random = new SplittableRandom(rank * 1000L + history);
+        int[] items = random.ints(0, 2000).distinct().limit(history).toArray();
+        double[] strengths = random.doubles(history, 0.5, 4).toArray();
+        for (ConfidenceForm confidence : ConfidenceForm.values()) {
+            AlsConfig config = AlsConfig.defaults().withRank(rank).withLambda(0.1).withAlpha(10.0)
+                    .withConfidence(confidence).withRegularisation(Regularisation.PLAIN);
+            for (DenseKernels kernels : new DenseKernels[] {DenseKernels.best(), DenseKernels.scalar()}) {
+                FoldIn foldIn = new FoldIn(FixedFactors.of(y), config, kernels);
+                FoldIn.Workspace ws = foldIn.newWorkspace();
+                double[] exact = foldIn.foldInUser(items, strengths);
+                double[] x = new double[rank];
+                int cold = foldIn.foldInConverged(items, strengths, null, x, ws);
+                String where = kernels + ", " + confidence + ", k " + rank + ", n_u " + history;
+                assertRelativelyEqual(exact, x, 1e-9);
+                assertTrue(cold >= 1 && cold <= foldIn.convergedStepCap(), where + ": steps " + cold);
+                double[] start = exact.clone();
+                for (int f = 0; f < rank; f++) {
+                    start[f] *= 1 + 0.2 * (random.nextDouble() - 0.5);
+                }
+                foldIn.foldInConverged(items, strengths, start, x, ws);
+                assertRelativelyEqual(exact, x, 1e-9);
+            }
+        }
+    }
+
     @Test
     void shouldGiveTheZeroVectorInNoStepsWhenTheResearcherHasNoInteractions() {
         FoldIn foldIn = foldIn(ConfidenceForm.LINEAR, Regularisation.PER_INTERACTION);

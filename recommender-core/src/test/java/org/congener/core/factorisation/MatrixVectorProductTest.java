@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
  */
 class MatrixVectorProductTest {
     private static final int LANES = DoubleVector.SPECIES_PREFERRED.length();
-    private static final int[] RANKS = {1, LANES - 1, LANES, LANES + 1, 2 * LANES + 3, 61, 64, 67};
+    private static final int[] RANKS = {1, LANES - 1, LANES, LANES + 1, 2 * LANES + 3, 8 * LANES, 61, 64, 67};
     private static final int[] ROWS = {0, 1, 3, 4, 5, 13, 64};
     /** Relative to Σ_t |a_t·x_t|: the rounding of a sum of n products is far below this for n ≤ 67. */
     private static final double TOLERANCE = 1e-12;
