@@ -66,7 +66,8 @@ import org.congener.streams.config.AppConfig;
  *       events per second are the sustained rate; then the bytes of the interaction store per
  *       researcher;</li>
  *   <li>the platform's ceiling: the same topology, topics, serdes, stores, guarantee and threads with a
- *       scorer that offers nothing, under the same unpaced burst.</li>
+ *       scorer that offers nothing, under the same unpaced burst, run three times; the best is the
+ *       ceiling.</li>
  * </ol>
  * Then this machine's multiply-add rate, the multiply-adds the app's scoring does per event (counted
  * from the researchers' actual history sizes), and the ideal rate 1 / (1/ceiling + work/rate). Researchers
@@ -83,6 +84,8 @@ public final class StreamsEndToEnd {
 
     private static final int NEIGHBOURS = 20;
     private static final int WARM_UP_EVENTS = 3_000;
+    /** Bursts of the pass-through run, the best of which is the ceiling. */
+    private static final int CEILING_BURSTS = 3;
     /** Warm-up bursts at most, and the JIT share of a burst below which the JVM counts as warm. */
     private static final int MAX_WARM_UP_ROUNDS = 30;
     private static final double SETTLED_JIT_SHARE = 0.05;
@@ -237,17 +240,25 @@ public final class StreamsEndToEnd {
             }
             metricsBefore = commitMetrics(app);
 
-            long jitBefore = jitMillis();
-            long wallBefore = System.nanoTime();
-            long streamCpuBefore = streamThreadCpuNanos(prefix + "bench");
-            double perSecond = unpaced(bootstrap, topics, "b", burst, workload, random, producedAt, latenciesNs,
-                    scorer == null ? workload : null);
-            double streamCpuPerEventUs = (streamThreadCpuNanos(prefix + "bench") - streamCpuBefore) / 1e3 / burst;
-            double jitShare = (jitMillis() - jitBefore) / ((System.nanoTime() - wallBefore) / 1e6);
-            System.out.printf(Locale.ROOT, "[%s] sustained: %d events at %.0f events/s; stream thread CPU %.0f µs per event"
-                    + " (%.0f %% busy); JIT compiling %.0f %% of the time%n", label, burst, perSecond, streamCpuPerEventUs,
-                    100 * streamCpuPerEventUs * perSecond / 1e6, 100 * jitShare);
-            printCommits(label + "] [burst", metricsBefore, commitMetrics(app));
+            // the ceiling is the platform's capacity, so it is the best of several bursts: a single short burst
+            // of the pass-through is easily slowed by the JIT, and a low ceiling would flatter the app
+            int bursts = scorer == null ? 1 : CEILING_BURSTS;
+            double perSecond = 0;
+            for (int b = 1; b <= bursts; b++) {
+                long jitBefore = jitMillis();
+                long wallBefore = System.nanoTime();
+                long streamCpuBefore = streamThreadCpuNanos(prefix + "bench");
+                double burstPerSecond = unpaced(bootstrap, topics, "b" + b + "-", burst, workload, random, producedAt,
+                        latenciesNs, scorer == null ? workload : null);
+                double streamCpuPerEventUs = (streamThreadCpuNanos(prefix + "bench") - streamCpuBefore) / 1e3 / burst;
+                double jitShare = (jitMillis() - jitBefore) / ((System.nanoTime() - wallBefore) / 1e6);
+                System.out.printf(Locale.ROOT, "[%s] sustained: %d events at %.0f events/s; stream thread CPU %.0f µs per"
+                        + " event (%.0f %% busy); JIT compiling %.0f %% of the time%n", label, burst, burstPerSecond,
+                        streamCpuPerEventUs, 100 * streamCpuPerEventUs * burstPerSecond / 1e6, 100 * jitShare);
+                printCommits(label + "] [burst", metricsBefore, commitMetrics(app));
+                metricsBefore = commitMetrics(app);
+                perSecond = Math.max(perSecond, burstPerSecond);
+            }
             stop.set(true);
             reader.join();
             long[] store = scorer == null ? interactionStoreBytes(app) : new long[] {0, 0};
