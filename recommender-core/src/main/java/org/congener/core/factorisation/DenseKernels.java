@@ -134,6 +134,20 @@ public interface DenseKernels {
      */
     void minMax(double[] v, int from, int to, double[] into);
 
+    /**
+     * The first index t in [from, to) with v[t] &gt; threshold, or {@code to} when there is none: the
+     * scan of a top-n selection once its list is full, where nearly every entry is passed over. A NaN
+     * entry is never above anything.
+     */
+    default int firstAbove(double[] v, int from, int to, double threshold) {
+        for (int t = from; t < to; t++) {
+            if (v[t] > threshold) {
+                return t;
+            }
+        }
+        return to;
+    }
+
     /** The plain-loop implementation. */
     static DenseKernels scalar() {
         return ScalarKernels.INSTANCE;

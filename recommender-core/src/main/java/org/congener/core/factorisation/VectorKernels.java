@@ -3,6 +3,7 @@ package org.congener.core.factorisation;
 import jdk.incubator.vector.DoubleVector;
 import jdk.incubator.vector.FloatVector;
 import jdk.incubator.vector.VectorShape;
+import jdk.incubator.vector.VectorMask;
 import jdk.incubator.vector.VectorOperators;
 import jdk.incubator.vector.VectorSpecies;
 
@@ -560,6 +561,26 @@ final class VectorKernels implements DenseKernels {
         }
         into[0] = least;
         into[1] = greatest;
+    }
+
+    /** Eight entries per comparison; only a block holding an entry above the threshold is looked into. */
+    @Override
+    public int firstAbove(double[] v, int from, int to, double threshold) {
+        int lanes = SPECIES.length();
+        DoubleVector bar = DoubleVector.broadcast(SPECIES, threshold);
+        int t = from;
+        for (; t + lanes <= to; t += lanes) {
+            VectorMask<Double> above = DoubleVector.fromArray(SPECIES, v, t).compare(VectorOperators.GT, bar);
+            if (above.anyTrue()) {
+                return t + above.firstTrue();
+            }
+        }
+        for (; t < to; t++) {
+            if (v[t] > threshold) {
+                return t;
+            }
+        }
+        return to;
     }
 
     private static DoubleVector widened(float[] a, int offset) {

@@ -49,24 +49,41 @@ public final class OneResearcherScoring {
     public static int[] topN(double[] fused, int n, IntPredicate eligible) {
         int[] best = new int[n];
         int size = 0;
-        for (int i = 0; i < fused.length; i++) {
+        int i = 0;
+        // until the list is full, every finite (or +∞) entry the filter accepts goes in
+        for (; i < fused.length && size < n; i++) {
             double s = fused[i];
-            if (s == Double.NEGATIVE_INFINITY || Double.isNaN(s)) {
+            if (s == Double.NEGATIVE_INFINITY || Double.isNaN(s) || !eligible.test(i)) {
                 continue;
             }
-            if (size == n && !(s > fused[best[size - 1]])) {
-                continue;
-            }
-            if (!eligible.test(i)) {
-                continue;
-            }
-            int p = size < n ? size++ : size - 1;
-            while (p > 0 && s > fused[best[p - 1]]) {
-                best[p] = best[p - 1];
-                p--;
-            }
-            best[p] = i;
+            size = insert(fused, best, size, n, i);
         }
-        return java.util.Arrays.copyOf(best, size);
+        if (size < n) {
+            return java.util.Arrays.copyOf(best, size);
+        }
+        // then only an entry above the last one listed can enter (NaN and −∞ never are), so the scan
+        // skips ahead to the next such entry; the same items as testing each in turn
+        double floor = n == 0 ? Double.POSITIVE_INFINITY : fused[best[n - 1]];
+        for (i = KERNELS.firstAbove(fused, i, fused.length, floor); i < fused.length;
+             i = KERNELS.firstAbove(fused, i + 1, fused.length, floor)) {
+            if (eligible.test(i)) {
+                insert(fused, best, size, n, i);
+                floor = fused[best[n - 1]];
+            }
+        }
+        return best;
+    }
+
+    /** Puts item i into best[0..size), best first, ties to the earlier; returns the new size (at most n). */
+    private static int insert(double[] fused, int[] best, int size, int n, int i) {
+        double s = fused[i];
+        int grown = size < n ? size + 1 : size;
+        int p = grown - 1;
+        while (p > 0 && s > fused[best[p - 1]]) {
+            best[p] = best[p - 1];
+            p--;
+        }
+        best[p] = i;
+        return grown;
     }
 }
