@@ -140,6 +140,17 @@ public final class StreamsEndToEnd {
             System.out.printf(Locale.ROOT, "interaction store: %.0f bytes per researcher over %d researchers%n",
                     app.storeBytesPerResearcher(), app.researchersStored());
             System.out.printf(Locale.ROOT, "broker and state dirs after the runs: %.1f MB%n", sizeMb(dir));
+        } finally {
+            // gigabytes of logs and state per run: a benchmark left on a machine must not fill its disk
+            deleteTree(dir);
+        }
+    }
+
+    private static void deleteTree(Path dir) throws java.io.IOException {
+        try (var paths = Files.walk(dir)) {
+            for (Path p : paths.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                Files.deleteIfExists(p);
+            }
         }
     }
 
