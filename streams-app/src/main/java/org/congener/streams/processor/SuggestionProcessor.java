@@ -94,6 +94,8 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
     private final Serializer<Suggestions> listWriter;
     private final Batching batching;
     private final List<Waiting> waiting = new ArrayList<>();
+    /** The pending flush of the waiting batch; null while nothing waits. */
+    private org.apache.kafka.streams.processor.Cancellable flushTimer;
     /** Set at start when the pending-lists store holds events a previous owner of the task had not published. */
     private boolean recoveryDue;
     private final CatalogueSimilarity catalogueSimilarity;
@@ -138,8 +140,10 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         try (KeyValueIterator<String, String> marks = pendingLists.all()) {
             recoveryDue = marks.hasNext();
         }
-        // the wait bounds a partly filled batch; the same punctuation publishes recovered events when no record comes
-        context.schedule(batching.longestWait(), PunctuationType.WALL_CLOCK_TIME, now -> publishWaiting(null));
+        if (recoveryDue) {
+            // publishes the recovered lists even when no record comes
+            armFlushTimer();
+        }
         this.researchers = stores.researchers();
         this.catalog = stores.catalog();
         this.stock = stores.stock();
@@ -206,7 +210,28 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         pendingLists.put(researcher.researcherId(), PendingMark.of(eventId, at, timestamp));
         Waiting event = new Waiting(begun, researcher, eventId, timestamp);
         waiting.add(event);
+        armFlushTimer();
         return event;
+    }
+
+    /**
+     * Schedules the flush of a partly filled batch {@code longestWait} from now, unless one is due.
+     * The timer runs only while something waits: Kafka Streams takes every wall-clock punctuation as
+     * work to commit, so a timer left running would make an idle app commit a transaction every commit
+     * interval.
+     */
+    private void armFlushTimer() {
+        if (flushTimer == null) {
+            flushTimer = context.schedule(batching.longestWait(), PunctuationType.WALL_CLOCK_TIME,
+                    now -> publishWaiting(null));
+        }
+    }
+
+    private void disarmFlushTimer() {
+        if (flushTimer != null) {
+            flushTimer.cancel();
+            flushTimer = null;
+        }
     }
 
     /**
@@ -221,6 +246,7 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
             recover();
         }
         if (waiting.isEmpty()) {
+            disarmFlushTimer();
             return;
         }
         RuntimeException currentFailure = null;
@@ -244,6 +270,7 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
                 pendingLists.delete(w.researcher().researcherId());
             }
             waiting.clear();
+            disarmFlushTimer();
         }
         if (currentFailure != null) {
             throw currentFailure;

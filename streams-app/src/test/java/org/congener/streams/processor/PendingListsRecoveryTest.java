@@ -76,6 +76,41 @@ class PendingListsRecoveryTest {
         assertTrue(latest.get("ada") != null && latest.get("ben") != null, "the query store holds both lists");
     }
 
+    /**
+     * Kafka Streams counts every wall-clock punctuation as work to commit, so the flush timer of a
+     * partly filled batch must run only while events wait; otherwise an idle app would commit a
+     * transaction every commit interval.
+     */
+    @Test
+    void shouldKeepTheFlushTimerOnlyWhileEventsWait() {
+        MockProcessorContext<String, byte[]> context = new MockProcessorContext<>(new Properties());
+        context.setCurrentSystemTimeMs(1_800_000_000_000L);
+        addStore(context, "interactions", new InteractionProfileSerde());
+        addStore(context, "groups", new GroupPopularitySerde());
+        addStore(context, "latest", Serdes.ByteArray());
+        addStore(context, "pending", Serdes.String());
+
+        SuggestionProcessor processor = processor();
+        processor.init(context);
+        assertTrue(context.scheduledPunctuators().isEmpty(), "nothing waits and nothing to recover: no timer");
+
+        processor.process(event("e1", "ada", "c-ethanol"));
+        processor.process(event("e2", "ben", "c-acetone"));
+        List<MockProcessorContext.CapturedPunctuator> timers = context.scheduledPunctuators();
+        assertEquals(1, timers.size(), "one timer for the waiting batch, however many events it holds");
+        assertEquals(LONG_WAIT, timers.get(0).getInterval(), "due after the longest wait");
+        assertFalse(timers.get(0).cancelled());
+
+        timers.get(0).getPunctuator().punctuate(context.currentSystemTimeMs());
+        assertEquals(2, context.forwarded().size(), "the flush publishes the batch");
+        assertTrue(timers.get(0).cancelled(), "and stops the timer once nothing waits");
+
+        processor.process(event("e3", "ada", "c-toluene"));
+        timers = context.scheduledPunctuators();
+        assertEquals(2, timers.size(), "the next waiting event starts a new timer");
+        assertFalse(timers.get(1).cancelled());
+    }
+
     private static SuggestionProcessor processor() {
         InMemoryTable<Researcher> researchers = new InMemoryTable<>();
         Fixtures.researchers().forEach(r -> researchers.accept(r.researcherId(), r));
