@@ -111,13 +111,15 @@ public final class ScoringWorkspace {
                 throw new IllegalArgumentException("item " + item + " is outside 0.." + (itemCount() - 1));
             }
             ascending &= p == 0 || items[p - 1] < item;
-            itemAndPosition[p] = ((long) item << 32) | p;
         }
         // a caller that keeps its items in order (the stream's rows, fold-in and scoring alike) is not sorted again
         if (ascending) {
             System.arraycopy(items, 0, sortedItems, 0, n);
             System.arraycopy(strengths, 0, sortedStrengths, 0, n);
         } else {
+            for (int p = 0; p < n; p++) {
+                itemAndPosition[p] = ((long) items[p] << 32) | p;
+            }
             java.util.Arrays.sort(itemAndPosition, 0, n);
             for (int p = 0; p < n; p++) {
                 int from = (int) itemAndPosition[p];

@@ -184,6 +184,7 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         if (waiting.size() >= batching.events()) {
             publishWaiting(waits);
         }
+        armFlushTimerIfWaiting();
     }
 
     /**
@@ -210,16 +211,21 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
         pendingLists.put(researcher.researcherId(), PendingMark.of(eventId, at, timestamp));
         Waiting event = new Waiting(begun, researcher, eventId, timestamp);
         waiting.add(event);
-        armFlushTimer();
         return event;
     }
 
     /**
-     * Schedules the flush of a partly filled batch {@code longestWait} from now, unless one is due.
-     * The timer runs only while something waits: Kafka Streams takes every wall-clock punctuation as
-     * work to commit, so a timer left running would make an idle app commit a transaction every commit
-     * interval.
+     * Schedules the flush of a partly filled batch {@code longestWait} from now, unless one is due or
+     * nothing waits. The timer runs only while something waits: Kafka Streams takes every wall-clock
+     * punctuation as work to commit, so a timer left running would make an idle app commit a
+     * transaction every commit interval.
      */
+    private void armFlushTimerIfWaiting() {
+        if (!waiting.isEmpty()) {
+            armFlushTimer();
+        }
+    }
+
     private void armFlushTimer() {
         if (flushTimer == null) {
             flushTimer = context.schedule(batching.longestWait(), PunctuationType.WALL_CLOCK_TIME,
@@ -335,6 +341,7 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
                 publishWaiting(null);
             }
         }
+        armFlushTimerIfWaiting();
     }
 
     private List<Suggestion> items(List<ScoredCandidate> ranked) {

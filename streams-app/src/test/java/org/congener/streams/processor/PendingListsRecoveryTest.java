@@ -39,12 +39,7 @@ class PendingListsRecoveryTest {
 
     @Test
     void shouldPublishTheListsAPreviousOwnerLeftPendingWhenTheNextOwnerStarts() {
-        MockProcessorContext<String, byte[]> context = new MockProcessorContext<>(new Properties());
-        context.setCurrentSystemTimeMs(1_800_000_000_000L);
-        addStore(context, "interactions", new InteractionProfileSerde());
-        addStore(context, "groups", new GroupPopularitySerde());
-        addStore(context, "latest", Serdes.ByteArray());
-        addStore(context, "pending", Serdes.String());
+        MockProcessorContext<String, byte[]> context = contextWithStores();
 
         SuggestionProcessor previousOwner = processor();
         previousOwner.init(context);
@@ -83,12 +78,7 @@ class PendingListsRecoveryTest {
      */
     @Test
     void shouldKeepTheFlushTimerOnlyWhileEventsWait() {
-        MockProcessorContext<String, byte[]> context = new MockProcessorContext<>(new Properties());
-        context.setCurrentSystemTimeMs(1_800_000_000_000L);
-        addStore(context, "interactions", new InteractionProfileSerde());
-        addStore(context, "groups", new GroupPopularitySerde());
-        addStore(context, "latest", Serdes.ByteArray());
-        addStore(context, "pending", Serdes.String());
+        MockProcessorContext<String, byte[]> context = contextWithStores();
 
         SuggestionProcessor processor = processor();
         processor.init(context);
@@ -109,6 +99,17 @@ class PendingListsRecoveryTest {
         timers = context.scheduledPunctuators();
         assertEquals(2, timers.size(), "the next waiting event starts a new timer");
         assertFalse(timers.get(1).cancelled());
+    }
+
+    /** A task's context holding the processor's four stores, in memory. */
+    private static MockProcessorContext<String, byte[]> contextWithStores() {
+        MockProcessorContext<String, byte[]> context = new MockProcessorContext<>(new Properties());
+        context.setCurrentSystemTimeMs(1_800_000_000_000L);
+        addStore(context, "interactions", new InteractionProfileSerde());
+        addStore(context, "groups", new GroupPopularitySerde());
+        addStore(context, "latest", Serdes.ByteArray());
+        addStore(context, "pending", Serdes.String());
+        return context;
     }
 
     private static SuggestionProcessor processor() {
