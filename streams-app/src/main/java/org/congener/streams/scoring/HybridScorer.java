@@ -275,15 +275,13 @@ public final class HybridScorer implements SuggestionScorer {
             var halfLife = model.settings().weights().halfLife();
             double halfLifeMs = halfLife == null ? 0 : halfLife.toMillis();
             int n = 0;
-            int entry = 0;
-            for (InteractionProfile.Entry e : profile.entries()) {
-                int i = model.indexOf(e.compoundId());
-                double strength = InteractionProfile.strengthAt(e, atEpochMs, halfLifeMs);
+            for (int entry = 0; entry < profile.size(); entry++) {
+                int i = model.indexOf(profile.compoundId(entry));
+                double strength = profile.strengthAt(entry, atEpochMs, halfLifeMs);
                 if (i >= 0 && strength > 0) {
                     byEntry[entry] = strength;
                     itemAndEntry[n++] = ((long) i << 32) | entry;
                 }
-                entry++;
             }
             int[] history = new int[n];
             for (int p = 0; p < n; p++) {

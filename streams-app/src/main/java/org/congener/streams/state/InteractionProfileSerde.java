@@ -1,8 +1,6 @@
 package org.congener.streams.state;
 
 import java.nio.ByteBuffer;
-import java.util.LinkedHashMap;
-import java.util.Map;
 
 import org.apache.kafka.common.serialization.Deserializer;
 import org.apache.kafka.common.serialization.Serde;
@@ -36,21 +34,22 @@ public final class InteractionProfileSerde implements Serde<InteractionProfile> 
         String version = profile.vectorVersion();
         float[] vector = profile.vectorUnder(version);
         int size = 1 + 4 + 2;
-        for (InteractionProfile.Entry e : profile.entries()) {
-            size += ModifiedUtf8.length(e.compoundId()) + 4 + 4 + 8 + 1;
+        int entries = profile.size();
+        for (int p = 0; p < entries; p++) {
+            size += ModifiedUtf8.length(profile.compoundId(p)) + 4 + 4 + 8 + 1;
         }
         if (vector != null) {
             size += ModifiedUtf8.length(version) + 4 * vector.length;
         }
         ByteBuffer out = ByteBuffer.allocate(size);
         out.put(FORMAT);
-        out.putInt(profile.size());
-        for (InteractionProfile.Entry e : profile.entries()) {
-            ModifiedUtf8.put(out, e.compoundId());
-            out.putFloat(e.strength());
-            out.putInt(e.events());
-            out.putLong(e.lastSeenEpochMs());
-            out.put((byte) (e.used() ? 1 : 0));
+        out.putInt(entries);
+        for (int p = 0; p < entries; p++) {
+            ModifiedUtf8.put(out, profile.compoundId(p));
+            out.putFloat(profile.strength(p));
+            out.putInt(profile.events(p));
+            out.putLong(profile.lastSeenEpochMs(p));
+            out.put((byte) (profile.used(p) ? 1 : 0));
         }
         if (vector == null) {
             out.putShort((short) 0);
@@ -72,25 +71,29 @@ public final class InteractionProfileSerde implements Serde<InteractionProfile> 
                 throw new IllegalStateException("unknown interaction profile format " + format);
             }
             int count = in.getInt();
-            Map<String, InteractionProfile.Entry> entries = new LinkedHashMap<>(Math.max(4, count * 2));
+            // each entry takes at least 19 bytes, so a count beyond what is left cannot be read (and is not
+            // allocated for)
+            if (count < 0 || count > in.remaining() / 19) {
+                throw new java.nio.BufferUnderflowException();
+            }
+            InteractionProfile profile = new InteractionProfile(count);
             for (int i = 0; i < count; i++) {
-                String id = ModifiedUtf8.get(in);
-                entries.put(id, new InteractionProfile.Entry(id, in.getFloat(), in.getInt(), in.getLong(),
-                        (in.get() & 1) != 0));
+                profile.append(ModifiedUtf8.get(in), in.getFloat(), in.getInt(), in.getLong(), (in.get() & 1) != 0);
             }
             if (format == FORMAT_WITHOUT_VECTOR) {
-                return new InteractionProfile(entries, null, null);
+                return profile;
             }
             int rank = in.getShort() & 0xFFFF;
             if (rank == 0) {
-                return new InteractionProfile(entries, null, null);
+                return profile;
             }
             String version = ModifiedUtf8.get(in);
             float[] vector = new float[rank];
             for (int f = 0; f < rank; f++) {
                 vector[f] = in.getFloat();
             }
-            return new InteractionProfile(entries, version, vector);
+            profile.restoreVector(version, vector);
+            return profile;
         } catch (java.nio.BufferUnderflowException e) {
             throw new IllegalStateException("interaction profile of " + bytes.length + " bytes is cut short", e);
         }

@@ -7,7 +7,6 @@ import java.io.DataOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
-import java.nio.charset.StandardCharsets;
 
 /**
  * Strings in the form of {@link java.io.DataOutput#writeUTF} (an unsigned 16-bit byte count, then
@@ -64,7 +63,7 @@ final class ModifiedUtf8 {
         }
         in.position(in.position() + count);
         if (ascii) {
-            return new String(array, from, count, StandardCharsets.US_ASCII);
+            return SharedAsciiStrings.of(array, from, count);
         }
         byte[] framed = new byte[2 + count];
         framed[0] = (byte) (count >>> 8);
