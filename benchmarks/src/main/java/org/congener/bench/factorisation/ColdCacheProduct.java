@@ -4,15 +4,19 @@ import java.util.Locale;
 import java.util.SplittableRandom;
 
 import org.congener.core.factorisation.DenseKernels;
+import org.congener.core.factorisation.FactorColumns;
+import org.congener.core.factorisation.FactorMatrix;
 
 /**
  * The CF product Y·x of one event with the factor matrix in cache (as a benchmark that repeats it
  * sees it) and evicted first (as the stream thread sees it, after the broker, RocksDB and the Kafka
- * clients ran between two events), for Y held as doubles and as floats. Eviction: a pass over a
- * buffer far larger than the last-level cache between two products; the pass is not timed.
+ * clients ran between two events): the row-major product over Y held as doubles
+ * ({@link DenseKernels#multiply}), and the factor-major product over Y held as floats that the
+ * scoring runs ({@link FactorColumns}). Eviction: a pass over a buffer far larger than the last-level
+ * cache between two products; the pass is not timed.
  *
- * <p>Then the product of a batch of B researchers' vectors with one pass over the floats, as the
- * stream scores a batch of events ({@link DenseKernels#multiplyMany}), reported per vector.
+ * <p>Then the factor-major product of a batch of B researchers' vectors with one pass over the floats,
+ * as the stream scores a batch of events ({@link FactorColumns#multiplyMany}), reported per vector.
  *
  * <p>Arguments: items rank repetitions evictionMegabytes batch.
  */
@@ -41,7 +45,10 @@ public final class ColdCacheProduct {
             xs[b] = random.doubles(rank, -1, 1).toArray();
         }
         double[][] outs = new double[batch][items];
-        double[] scratch = new double[DenseKernels.WIDEN_BLOCK_ROWS * rank];
+        FactorColumns columns = FactorColumns.of(new FactorMatrix(items, rank, wide));
+        if (!columns.floats()) {
+            throw new IllegalStateException("factors drawn as floats are held as doubles");
+        }
         long[] evict = new long[evictMb * 131_072];
         DenseKernels kernels = DenseKernels.best();
         System.out.printf(Locale.ROOT, "%d items, rank %d, %s; %d products each, eviction buffer %d MB%n", items, rank,
@@ -49,20 +56,19 @@ public final class ColdCacheProduct {
         for (int round = 0; round < 2; round++) {
             // round 0 warms the JIT; round 1 is reported
             double[] hotWide = time(repetitions, () -> kernels.multiply(wide, 0, items, rank, x, 0, out, 0), null);
-            double[] hotNarrow = time(repetitions, () -> kernels.multiply(narrow, 0, items, rank, x, 0, out, 0, scratch), null);
+            double[] hotNarrow = time(repetitions, () -> columns.multiply(kernels, x, out), null);
             double[] coldWide = time(repetitions, () -> kernels.multiply(wide, 0, items, rank, x, 0, out, 0), evict);
-            double[] coldNarrow = time(repetitions, () -> kernels.multiply(narrow, 0, items, rank, x, 0, out, 0, scratch), evict);
-            double[] hotBatch = time(repetitions, () -> kernels.multiplyMany(narrow, 0, items, rank, xs, batch, outs, 0,
-                    scratch), null);
-            double[] coldBatch = time(repetitions, () -> kernels.multiplyMany(narrow, 0, items, rank, xs, batch, outs, 0,
-                    scratch), evict);
+            double[] coldNarrow = time(repetitions, () -> columns.multiply(kernels, x, out), evict);
+            double[] hotBatch = time(repetitions, () -> columns.multiplyMany(kernels, xs, batch, outs), null);
+            double[] coldBatch = time(repetitions, () -> columns.multiplyMany(kernels, xs, batch, outs), evict);
             if (round == 1) {
-                report("doubles, in cache", hotWide, wide.length * 8L);
-                report("floats,  in cache", hotNarrow, narrow.length * 4L);
-                report("doubles, evicted ", coldWide, wide.length * 8L);
-                report("floats,  evicted ", coldNarrow, narrow.length * 4L);
-                reportPerVector("floats,  batch of " + batch + ", in cache", hotBatch, batch);
-                reportPerVector("floats,  batch of " + batch + ", evicted ", coldBatch, batch);
+                long floatBytes = (long) columns.stride() * rank * 4;
+                report("doubles, row-major,    in cache", hotWide, wide.length * 8L);
+                report("floats,  factor-major, in cache", hotNarrow, floatBytes);
+                report("doubles, row-major,    evicted ", coldWide, wide.length * 8L);
+                report("floats,  factor-major, evicted ", coldNarrow, floatBytes);
+                reportPerVector("floats,  factor-major, batch of " + batch + ", in cache", hotBatch, batch);
+                reportPerVector("floats,  factor-major, batch of " + batch + ", evicted ", coldBatch, batch);
             }
         }
         System.out.println(out[items / 2] == 12345.0 ? "" : "");

@@ -16,10 +16,10 @@ public interface DenseKernels {
 
     /**
      * out[outOff+r] = Σ_t a[aOff+r·n+t]·x[xOff+t] for r &lt; rows: the product of a row-major block of
-     * {@code rows} × {@code n} with a vector (the CF scores Y·x of every item in one call). Several rows
-     * are taken per pass so each load of x serves all of them. Each row is summed in the order that
-     * {@link #dot} uses, so out[r] equals {@code dot(a, aOff + r·n, x, xOff, n)} bit for bit. Modifies
-     * {@code out}.
+     * {@code rows} × {@code n} with a vector (for instance the fold-in's products with its rows and its
+     * Gram matrix). Several rows are taken per pass so each load of x serves all of them. Each row is
+     * summed in the order that {@link #dot} uses, so out[r] equals {@code dot(a, aOff + r·n, x, xOff, n)}
+     * bit for bit. Modifies {@code out}.
      */
     void multiply(double[] a, int aOff, int rows, int n, double[] x, int xOff, double[] out, int outOff);
 
@@ -70,62 +70,39 @@ public interface DenseKernels {
         }
     }
 
-    /** Rows widened per block by {@link #multiply(float[], int, int, int, double[], int, double[], int, double[])}. */
-    int WIDEN_BLOCK_ROWS = 32;
+    /**
+     * The product Y·x with Y held factor-major: y_it = a[aOff + t·stride + i], factor t's entries of
+     * all {@code rows} items side by side, the next factor {@code stride} ≥ rows entries on. For each
+     * i &lt; rows, out[outOff+i] = s_i with s_i the chain s ← fma(y_it, x[xOff+t], s) for
+     * t = 0, 1, …, n−1 from s = +0.0: one {@link Math#fma} rounding per factor, in factor order, and
+     * nothing summed in any other order, so every implementation gives the same bits. Entries of a
+     * factor's block from {@code rows} to {@code stride} may be read but never reach out (the block
+     * may be padded to whole vectors). Needs a.length ≥ aOff + n·stride. Modifies {@code out} in
+     * [outOff, outOff+rows) only.
+     */
+    void multiplyFactorMajor(double[] a, int aOff, int rows, int stride, int n, double[] x, int xOff, double[] out,
+                             int outOff);
 
     /**
-     * The same product with the block held as floats: each block of up to {@link #WIDEN_BLOCK_ROWS}
-     * rows is widened into {@code scratch} (at least that many rows × n doubles) and multiplied by
-     * {@link #multiply(double[], int, int, int, double[], int, double[], int)}. Widening a float is
-     * exact, so out equals the double product of the widened block bit for bit; what changes is that
-     * half the bytes come from memory. Published item factors are floats, and at 10,000 × 64 the double
-     * block (5 MB) does not stay in cache between events of a busy stream thread. Modifies {@code out}
-     * and {@code scratch}.
+     * {@link #multiplyFactorMajor(double[], int, int, int, int, double[], int, double[], int)} with the
+     * factors held as floats: each y_it is widened to double (exactly) before its multiply-add, so out
+     * equals the double product of the widened factors bit for bit.
      */
-    default void multiply(float[] a, int aOff, int rows, int n, double[] x, int xOff, double[] out, int outOff,
-                          double[] scratch) {
-        for (int r = 0; r < rows; r += WIDEN_BLOCK_ROWS) {
-            int block = Math.min(WIDEN_BLOCK_ROWS, rows - r);
-            int from = aOff + r * n;
-            for (int t = 0; t < block * n; t++) {
-                scratch[t] = a[from + t];
-            }
-            multiply(scratch, 0, block, n, x, xOff, out, outOff + r);
-        }
-    }
+    void multiplyFactorMajor(float[] a, int aOff, int rows, int stride, int n, double[] x, int xOff, double[] out,
+                             int outOff);
 
     /**
-     * The product of one block with several vectors: out_c[outOff+r] = Σ_t a[aOff+r·n+t]·x_c[t] for
-     * r &lt; rows and c &lt; count. Each block of up to {@link #WIDEN_BLOCK_ROWS} rows is widened into
-     * {@code scratch} once and multiplied with every x_c by
-     * {@link #multiply(double[], int, int, int, double[], int, double[], int)}, so the factors come from
-     * memory once for all {@code count} vectors (the CF scores of several researchers in one pass), and
-     * each out_c equals the one-vector product bit for bit. Modifies {@code outs} and {@code scratch}.
+     * The factor-major product with several vectors: for c &lt; count, outs[c] gets what
+     * {@link #multiplyFactorMajor(float[], int, int, int, int, double[], int, double[], int)} gives for
+     * x = xs[c] (read from index 0) and out = outs[c], bit for bit, with the factors read from memory
+     * once for all of them. Modifies outs[c][outOff..outOff+rows) for c &lt; count only.
      */
-    default void multiplyMany(float[] a, int aOff, int rows, int n, double[][] xs, int count, double[][] outs,
-                              int outOff, double[] scratch) {
-        for (int r = 0; r < rows; r += WIDEN_BLOCK_ROWS) {
-            int block = Math.min(WIDEN_BLOCK_ROWS, rows - r);
-            int from = aOff + r * n;
-            for (int t = 0; t < block * n; t++) {
-                scratch[t] = a[from + t];
-            }
-            for (int c = 0; c < count; c++) {
-                multiply(scratch, 0, block, n, xs[c], 0, outs[c], outOff + r);
-            }
-        }
-    }
+    void multiplyFactorMajorMany(float[] a, int aOff, int rows, int stride, int n, double[][] xs, int count,
+                                 double[][] outs, int outOff);
 
-    /** The same for factors held as doubles: each row block is used for all vectors while it is in cache. */
-    default void multiplyMany(double[] a, int aOff, int rows, int n, double[][] xs, int count, double[][] outs,
-                              int outOff) {
-        for (int r = 0; r < rows; r += WIDEN_BLOCK_ROWS) {
-            int block = Math.min(WIDEN_BLOCK_ROWS, rows - r);
-            for (int c = 0; c < count; c++) {
-                multiply(a, aOff + r * n, block, n, xs[c], 0, outs[c], outOff + r);
-            }
-        }
-    }
+    /** The same for factors held as doubles. */
+    void multiplyFactorMajorMany(double[] a, int aOff, int rows, int stride, int n, double[][] xs, int count,
+                                 double[][] outs, int outOff);
 
     /**
      * The least and the greatest of v[from..to) by {@link Math#min} and {@link Math#max} (so −0.0 is

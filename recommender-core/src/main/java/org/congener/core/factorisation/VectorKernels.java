@@ -350,191 +350,272 @@ final class VectorKernels implements DenseKernels {
     }
 
     /**
-     * The float-block product with the widening in registers: each lane block of a row is loaded as
-     * floats and converted to one double vector, then multiplied exactly as in the double product
-     * (same lanes, same order, same tail), so the result is the double product of the widened block
-     * bit for bit without a pass through a scratch array.
+     * The factor-major product: each lane is one item's chain, so a row's sum never leaves its lane
+     * and needs no horizontal sum. Four lane blocks of items at a time keep four independent chains in
+     * flight (the multiply-add latency is four cycles); the items after the last group of four, one
+     * block at a time, the last block stored under a mask; items past the last whole block of the
+     * stride (a stride not padded to whole vectors) one at a time with {@link Math#fma}.
      */
     @Override
-    public void multiply(float[] a, int aOff, int rows, int n, double[] x, int xOff, double[] out, int outOff,
-                         double[] scratch) {
-        int r = 0;
-        for (; r + 4 <= rows; r += 4) {
-            fourRows(a, aOff + r * n, n, x, xOff, out, outOff + r);
+    public void multiplyFactorMajor(float[] a, int aOff, int rows, int stride, int n, double[] x, int xOff,
+                                    double[] out, int outOff) {
+        int group = 4 * SPECIES.length();
+        int i = 0;
+        for (; i + group <= rows; i += group) {
+            fourBlocks(a, aOff + i, stride, n, x, xOff, out, outOff + i);
         }
-        if (r < rows) {
-            // the last rows through the scratch path, which ends in dot's order like the double product
-            DenseKernels.super.multiply(a, aOff + r * n, rows - r, n, x, xOff, out, outOff + r, scratch);
+        lastItems(a, aOff, i, rows, stride, n, x, xOff, out, outOff);
+    }
+
+    @Override
+    public void multiplyFactorMajor(double[] a, int aOff, int rows, int stride, int n, double[] x, int xOff,
+                                    double[] out, int outOff) {
+        int group = 4 * SPECIES.length();
+        int i = 0;
+        for (; i + group <= rows; i += group) {
+            fourBlocks(a, aOff + i, stride, n, x, xOff, out, outOff + i);
         }
+        lastItems(a, aOff, i, rows, stride, n, x, xOff, out, outOff);
     }
 
     /**
-     * Several vectors against one float block, widened in registers: four rows at a time, each row
-     * block loaded and widened once for two vectors. Every (row, vector) pair is summed exactly as
-     * {@link #multiply(float[], int, int, int, double[], int, double[], int, double[])} sums it, so each
-     * out_c is that product bit for bit.
+     * Items in groups of four lane blocks, and for each group the vectors four at a time: each widened
+     * block of factors serves four vectors (sixteen accumulator chains, with the four blocks and a
+     * broadcast 21 of AVX-512's 32 vector registers), and the group's factors (4 blocks × k, 8 KB as
+     * floats at k = 64) stay in the first-level cache while every vector passes over them. The vectors
+     * left over and the items after the last group go one vector at a time, as in the one-vector
+     * product.
      */
     @Override
-    public void multiplyMany(float[] a, int aOff, int rows, int n, double[][] xs, int count, double[][] outs,
-                             int outOff, double[] scratch) {
-        int r = 0;
-        for (; r + 4 <= rows; r += 4) {
-            int rowsAt = aOff + r * n;
+    public void multiplyFactorMajorMany(float[] a, int aOff, int rows, int stride, int n, double[][] xs, int count,
+                                        double[][] outs, int outOff) {
+        int group = 4 * SPECIES.length();
+        int i = 0;
+        for (; i + group <= rows; i += group) {
             int c = 0;
             for (; c + 4 <= count; c += 4) {
-                fourRowsFourVectors(a, rowsAt, n, xs, c, outs, outOff + r);
+                fourBlocksFourVectors(a, aOff + i, stride, n, xs[c], xs[c + 1], xs[c + 2], xs[c + 3],
+                        outs[c], outs[c + 1], outs[c + 2], outs[c + 3], outOff + i);
             }
-            for (; c + 2 <= count; c += 2) {
-                fourRowsTwoVectors(a, rowsAt, n, xs[c], xs[c + 1], outs[c], outs[c + 1], outOff + r);
-            }
-            if (c < count) {
-                fourRows(a, rowsAt, n, xs[c], 0, outs[c], outOff + r);
+            for (; c < count; c++) {
+                fourBlocks(a, aOff + i, stride, n, xs[c], 0, outs[c], outOff + i);
             }
         }
-        if (r < rows) {
-            for (int c = 0; c < count; c++) {
-                DenseKernels.super.multiply(a, aOff + r * n, rows - r, n, xs[c], 0, outs[c], outOff + r, scratch);
-            }
+        for (int c = 0; c < count; c++) {
+            lastItems(a, aOff, i, rows, stride, n, xs[c], 0, outs[c], outOff);
         }
     }
 
-    /** out[at..at+4) = the four float rows from {@code o0} times x: the body of the float product. */
-    private static void fourRows(float[] a, int o0, int n, double[] x, int xOff, double[] out, int at) {
-        int lanes = SPECIES.length();
-        int body = n - n % lanes;
-        int o1 = o0 + n;
-        int o2 = o1 + n;
-        int o3 = o2 + n;
-        DoubleVector acc0 = DoubleVector.zero(SPECIES);
-        DoubleVector acc1 = acc0;
-        DoubleVector acc2 = acc0;
-        DoubleVector acc3 = acc0;
-        for (int t = 0; t < body; t += lanes) {
-            DoubleVector vx = DoubleVector.fromArray(SPECIES, x, xOff + t);
-            acc0 = widened(a, o0 + t).fma(vx, acc0);
-            acc1 = widened(a, o1 + t).fma(vx, acc1);
-            acc2 = widened(a, o2 + t).fma(vx, acc2);
-            acc3 = widened(a, o3 + t).fma(vx, acc3);
+    @Override
+    public void multiplyFactorMajorMany(double[] a, int aOff, int rows, int stride, int n, double[][] xs, int count,
+                                        double[][] outs, int outOff) {
+        int group = 4 * SPECIES.length();
+        int i = 0;
+        for (; i + group <= rows; i += group) {
+            int c = 0;
+            for (; c + 4 <= count; c += 4) {
+                fourBlocksFourVectors(a, aOff + i, stride, n, xs[c], xs[c + 1], xs[c + 2], xs[c + 3],
+                        outs[c], outs[c + 1], outs[c + 2], outs[c + 3], outOff + i);
+            }
+            for (; c < count; c++) {
+                fourBlocks(a, aOff + i, stride, n, xs[c], 0, outs[c], outOff + i);
+            }
         }
-        finish(a, o0, n, body, x, xOff, acc0, acc1, acc2, acc3, out, at);
+        for (int c = 0; c < count; c++) {
+            lastItems(a, aOff, i, rows, stride, n, xs[c], 0, outs[c], outOff);
+        }
+    }
+
+    /** Four lane blocks of items from {@code at} (in factor 0's block) times one vector, into out[to..). */
+    private static void fourBlocks(float[] a, int at, int stride, int n, double[] x, int xOff, double[] out, int to) {
+        int lanes = SPECIES.length();
+        DoubleVector s0 = DoubleVector.zero(SPECIES);
+        DoubleVector s1 = s0;
+        DoubleVector s2 = s0;
+        DoubleVector s3 = s0;
+        for (int t = 0, p = at; t < n; t++, p += stride) {
+            DoubleVector xt = DoubleVector.broadcast(SPECIES, x[xOff + t]);
+            s0 = widened(a, p).fma(xt, s0);
+            s1 = widened(a, p + lanes).fma(xt, s1);
+            s2 = widened(a, p + 2 * lanes).fma(xt, s2);
+            s3 = widened(a, p + 3 * lanes).fma(xt, s3);
+        }
+        store(s0, s1, s2, s3, out, to);
+    }
+
+    private static void fourBlocks(double[] a, int at, int stride, int n, double[] x, int xOff, double[] out,
+                                   int to) {
+        int lanes = SPECIES.length();
+        DoubleVector s0 = DoubleVector.zero(SPECIES);
+        DoubleVector s1 = s0;
+        DoubleVector s2 = s0;
+        DoubleVector s3 = s0;
+        for (int t = 0, p = at; t < n; t++, p += stride) {
+            DoubleVector xt = DoubleVector.broadcast(SPECIES, x[xOff + t]);
+            s0 = DoubleVector.fromArray(SPECIES, a, p).fma(xt, s0);
+            s1 = DoubleVector.fromArray(SPECIES, a, p + lanes).fma(xt, s1);
+            s2 = DoubleVector.fromArray(SPECIES, a, p + 2 * lanes).fma(xt, s2);
+            s3 = DoubleVector.fromArray(SPECIES, a, p + 3 * lanes).fma(xt, s3);
+        }
+        store(s0, s1, s2, s3, out, to);
+    }
+
+    /** {@link #fourBlocks} for four vectors w, x, y, z at once, each widened block serving all four. */
+    private static void fourBlocksFourVectors(float[] a, int at, int stride, int n, double[] w, double[] x,
+                                              double[] y, double[] z, double[] outW, double[] outX, double[] outY,
+                                              double[] outZ, int to) {
+        int lanes = SPECIES.length();
+        DoubleVector w0 = DoubleVector.zero(SPECIES);
+        DoubleVector w1 = w0;
+        DoubleVector w2 = w0;
+        DoubleVector w3 = w0;
+        DoubleVector x0 = w0;
+        DoubleVector x1 = w0;
+        DoubleVector x2 = w0;
+        DoubleVector x3 = w0;
+        DoubleVector y0 = w0;
+        DoubleVector y1 = w0;
+        DoubleVector y2 = w0;
+        DoubleVector y3 = w0;
+        DoubleVector z0 = w0;
+        DoubleVector z1 = w0;
+        DoubleVector z2 = w0;
+        DoubleVector z3 = w0;
+        for (int t = 0, p = at; t < n; t++, p += stride) {
+            DoubleVector f0 = widened(a, p);
+            DoubleVector f1 = widened(a, p + lanes);
+            DoubleVector f2 = widened(a, p + 2 * lanes);
+            DoubleVector f3 = widened(a, p + 3 * lanes);
+            DoubleVector b = DoubleVector.broadcast(SPECIES, w[t]);
+            w0 = f0.fma(b, w0);
+            w1 = f1.fma(b, w1);
+            w2 = f2.fma(b, w2);
+            w3 = f3.fma(b, w3);
+            b = DoubleVector.broadcast(SPECIES, x[t]);
+            x0 = f0.fma(b, x0);
+            x1 = f1.fma(b, x1);
+            x2 = f2.fma(b, x2);
+            x3 = f3.fma(b, x3);
+            b = DoubleVector.broadcast(SPECIES, y[t]);
+            y0 = f0.fma(b, y0);
+            y1 = f1.fma(b, y1);
+            y2 = f2.fma(b, y2);
+            y3 = f3.fma(b, y3);
+            b = DoubleVector.broadcast(SPECIES, z[t]);
+            z0 = f0.fma(b, z0);
+            z1 = f1.fma(b, z1);
+            z2 = f2.fma(b, z2);
+            z3 = f3.fma(b, z3);
+        }
+        store(w0, w1, w2, w3, outW, to);
+        store(x0, x1, x2, x3, outX, to);
+        store(y0, y1, y2, y3, outY, to);
+        store(z0, z1, z2, z3, outZ, to);
+    }
+
+    private static void fourBlocksFourVectors(double[] a, int at, int stride, int n, double[] w, double[] x,
+                                              double[] y, double[] z, double[] outW, double[] outX, double[] outY,
+                                              double[] outZ, int to) {
+        int lanes = SPECIES.length();
+        DoubleVector w0 = DoubleVector.zero(SPECIES);
+        DoubleVector w1 = w0;
+        DoubleVector w2 = w0;
+        DoubleVector w3 = w0;
+        DoubleVector x0 = w0;
+        DoubleVector x1 = w0;
+        DoubleVector x2 = w0;
+        DoubleVector x3 = w0;
+        DoubleVector y0 = w0;
+        DoubleVector y1 = w0;
+        DoubleVector y2 = w0;
+        DoubleVector y3 = w0;
+        DoubleVector z0 = w0;
+        DoubleVector z1 = w0;
+        DoubleVector z2 = w0;
+        DoubleVector z3 = w0;
+        for (int t = 0, p = at; t < n; t++, p += stride) {
+            DoubleVector f0 = DoubleVector.fromArray(SPECIES, a, p);
+            DoubleVector f1 = DoubleVector.fromArray(SPECIES, a, p + lanes);
+            DoubleVector f2 = DoubleVector.fromArray(SPECIES, a, p + 2 * lanes);
+            DoubleVector f3 = DoubleVector.fromArray(SPECIES, a, p + 3 * lanes);
+            DoubleVector b = DoubleVector.broadcast(SPECIES, w[t]);
+            w0 = f0.fma(b, w0);
+            w1 = f1.fma(b, w1);
+            w2 = f2.fma(b, w2);
+            w3 = f3.fma(b, w3);
+            b = DoubleVector.broadcast(SPECIES, x[t]);
+            x0 = f0.fma(b, x0);
+            x1 = f1.fma(b, x1);
+            x2 = f2.fma(b, x2);
+            x3 = f3.fma(b, x3);
+            b = DoubleVector.broadcast(SPECIES, y[t]);
+            y0 = f0.fma(b, y0);
+            y1 = f1.fma(b, y1);
+            y2 = f2.fma(b, y2);
+            y3 = f3.fma(b, y3);
+            b = DoubleVector.broadcast(SPECIES, z[t]);
+            z0 = f0.fma(b, z0);
+            z1 = f1.fma(b, z1);
+            z2 = f2.fma(b, z2);
+            z3 = f3.fma(b, z3);
+        }
+        store(w0, w1, w2, w3, outW, to);
+        store(x0, x1, x2, x3, outX, to);
+        store(y0, y1, y2, y3, outY, to);
+        store(z0, z1, z2, z3, outZ, to);
+    }
+
+    private static void store(DoubleVector s0, DoubleVector s1, DoubleVector s2, DoubleVector s3, double[] out,
+                              int to) {
+        int lanes = SPECIES.length();
+        s0.intoArray(out, to);
+        s1.intoArray(out, to + lanes);
+        s2.intoArray(out, to + 2 * lanes);
+        s3.intoArray(out, to + 3 * lanes);
     }
 
     /**
-     * {@link #fourRows} for vectors c..c+3 at once: each widened row block serves four vectors, sixteen
-     * independent accumulator chains.
+     * Items from..rows: one lane block at a time while the block lies inside the stride (the lanes past
+     * {@code rows} read padding and are not stored), then one item at a time in the same order.
      */
-    private static void fourRowsFourVectors(float[] a, int o0, int n, double[][] xs, int c, double[][] outs, int at) {
+    private static void lastItems(float[] a, int aOff, int from, int rows, int stride, int n, double[] x, int xOff,
+                                  double[] out, int outOff) {
         int lanes = SPECIES.length();
-        int body = n - n % lanes;
-        int o1 = o0 + n;
-        int o2 = o1 + n;
-        int o3 = o2 + n;
-        double[] xa = xs[c];
-        double[] xb = xs[c + 1];
-        double[] xc = xs[c + 2];
-        double[] xd = xs[c + 3];
-        DoubleVector a0 = DoubleVector.zero(SPECIES);
-        DoubleVector a1 = a0;
-        DoubleVector a2 = a0;
-        DoubleVector a3 = a0;
-        DoubleVector b0 = a0;
-        DoubleVector b1 = a0;
-        DoubleVector b2 = a0;
-        DoubleVector b3 = a0;
-        DoubleVector c0 = a0;
-        DoubleVector c1 = a0;
-        DoubleVector c2 = a0;
-        DoubleVector c3 = a0;
-        DoubleVector d0 = a0;
-        DoubleVector d1 = a0;
-        DoubleVector d2 = a0;
-        DoubleVector d3 = a0;
-        for (int t = 0; t < body; t += lanes) {
-            DoubleVector w0 = widened(a, o0 + t);
-            DoubleVector w1 = widened(a, o1 + t);
-            DoubleVector w2 = widened(a, o2 + t);
-            DoubleVector w3 = widened(a, o3 + t);
-            DoubleVector va = DoubleVector.fromArray(SPECIES, xa, t);
-            a0 = w0.fma(va, a0);
-            a1 = w1.fma(va, a1);
-            a2 = w2.fma(va, a2);
-            a3 = w3.fma(va, a3);
-            DoubleVector vb = DoubleVector.fromArray(SPECIES, xb, t);
-            b0 = w0.fma(vb, b0);
-            b1 = w1.fma(vb, b1);
-            b2 = w2.fma(vb, b2);
-            b3 = w3.fma(vb, b3);
-            DoubleVector vc = DoubleVector.fromArray(SPECIES, xc, t);
-            c0 = w0.fma(vc, c0);
-            c1 = w1.fma(vc, c1);
-            c2 = w2.fma(vc, c2);
-            c3 = w3.fma(vc, c3);
-            DoubleVector vd = DoubleVector.fromArray(SPECIES, xd, t);
-            d0 = w0.fma(vd, d0);
-            d1 = w1.fma(vd, d1);
-            d2 = w2.fma(vd, d2);
-            d3 = w3.fma(vd, d3);
+        int i = from;
+        for (; i < rows && i + lanes <= stride; i += lanes) {
+            DoubleVector s = DoubleVector.zero(SPECIES);
+            for (int t = 0, p = aOff + i; t < n; t++, p += stride) {
+                s = widened(a, p).fma(DoubleVector.broadcast(SPECIES, x[xOff + t]), s);
+            }
+            s.intoArray(out, outOff + i, SPECIES.indexInRange(i, rows));
         }
-        finish(a, o0, n, body, xa, 0, a0, a1, a2, a3, outs[c], at);
-        finish(a, o0, n, body, xb, 0, b0, b1, b2, b3, outs[c + 1], at);
-        finish(a, o0, n, body, xc, 0, c0, c1, c2, c3, outs[c + 2], at);
-        finish(a, o0, n, body, xd, 0, d0, d1, d2, d3, outs[c + 3], at);
+        for (; i < rows; i++) {
+            double s = 0.0;
+            for (int t = 0, p = aOff + i; t < n; t++, p += stride) {
+                s = Math.fma((double) a[p], x[xOff + t], s);
+            }
+            out[outOff + i] = s;
+        }
     }
 
-    /** The four rows' lane sums, then their tails in dot's order, into out[at..at+4). */
-    private static void finish(float[] a, int o0, int n, int body, double[] x, int xOff, DoubleVector acc0,
-                               DoubleVector acc1, DoubleVector acc2, DoubleVector acc3, double[] out, int at) {
-        double s0 = acc0.reduceLanes(VectorOperators.ADD);
-        double s1 = acc1.reduceLanes(VectorOperators.ADD);
-        double s2 = acc2.reduceLanes(VectorOperators.ADD);
-        double s3 = acc3.reduceLanes(VectorOperators.ADD);
-        for (int t = body; t < n; t++) {
-            double xt = x[xOff + t];
-            s0 += (double) a[o0 + t] * xt;
-            s1 += (double) a[o0 + n + t] * xt;
-            s2 += (double) a[o0 + 2 * n + t] * xt;
-            s3 += (double) a[o0 + 3 * n + t] * xt;
-        }
-        out[at] = s0;
-        out[at + 1] = s1;
-        out[at + 2] = s2;
-        out[at + 3] = s3;
-    }
-
-    /** {@link #fourRows} for two vectors at once, sharing each widened row block. */
-    private static void fourRowsTwoVectors(float[] a, int o0, int n, double[] x, double[] z, double[] outX,
-                                           double[] outZ, int at) {
+    private static void lastItems(double[] a, int aOff, int from, int rows, int stride, int n, double[] x, int xOff,
+                                  double[] out, int outOff) {
         int lanes = SPECIES.length();
-        int body = n - n % lanes;
-        int o1 = o0 + n;
-        int o2 = o1 + n;
-        int o3 = o2 + n;
-        DoubleVector x0 = DoubleVector.zero(SPECIES);
-        DoubleVector x1 = x0;
-        DoubleVector x2 = x0;
-        DoubleVector x3 = x0;
-        DoubleVector z0 = x0;
-        DoubleVector z1 = x0;
-        DoubleVector z2 = x0;
-        DoubleVector z3 = x0;
-        for (int t = 0; t < body; t += lanes) {
-            DoubleVector vx = DoubleVector.fromArray(SPECIES, x, t);
-            DoubleVector vz = DoubleVector.fromArray(SPECIES, z, t);
-            DoubleVector w0 = widened(a, o0 + t);
-            DoubleVector w1 = widened(a, o1 + t);
-            DoubleVector w2 = widened(a, o2 + t);
-            DoubleVector w3 = widened(a, o3 + t);
-            x0 = w0.fma(vx, x0);
-            x1 = w1.fma(vx, x1);
-            x2 = w2.fma(vx, x2);
-            x3 = w3.fma(vx, x3);
-            z0 = w0.fma(vz, z0);
-            z1 = w1.fma(vz, z1);
-            z2 = w2.fma(vz, z2);
-            z3 = w3.fma(vz, z3);
+        int i = from;
+        for (; i < rows && i + lanes <= stride; i += lanes) {
+            DoubleVector s = DoubleVector.zero(SPECIES);
+            for (int t = 0, p = aOff + i; t < n; t++, p += stride) {
+                s = DoubleVector.fromArray(SPECIES, a, p).fma(DoubleVector.broadcast(SPECIES, x[xOff + t]), s);
+            }
+            s.intoArray(out, outOff + i, SPECIES.indexInRange(i, rows));
         }
-        finish(a, o0, n, body, x, 0, x0, x1, x2, x3, outX, at);
-        finish(a, o0, n, body, z, 0, z0, z1, z2, z3, outZ, at);
+        for (; i < rows; i++) {
+            double s = 0.0;
+            for (int t = 0, p = aOff + i; t < n; t++, p += stride) {
+                s = Math.fma(a[p], x[xOff + t], s);
+            }
+            out[outOff + i] = s;
+        }
     }
 
     @Override

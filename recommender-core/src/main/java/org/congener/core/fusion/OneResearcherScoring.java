@@ -37,7 +37,11 @@ public final class OneResearcherScoring {
 
     private static final DenseKernels KERNELS = DenseKernels.best();
 
-    /** x·y_i for every item i: Y·x by the blocked matrix–vector product of the factorisation kernels. */
+    /**
+     * x·y_i for every item i: Y·x by the row-major product of the factorisation kernels
+     * ({@link DenseKernels#multiply}). Its sums run in another order than the factor-major chains of
+     * {@link ResearcherScoring}, so they agree with {@link Scores#cf} to rounding, not bit for bit.
+     */
     public static void cfScores(double[] x, FactorMatrix itemFactors, double[] out) {
         KERNELS.multiply(itemFactors.data(), 0, out.length, itemFactors.rank(), x, 0, out, 0);
     }

@@ -1,15 +1,16 @@
 package org.congener.core.fusion;
 
 import org.congener.core.factorisation.DenseKernels;
+import org.congener.core.factorisation.FactorColumns;
 import org.congener.core.factorisation.FactorMatrix;
 import org.congener.core.factorisation.FoldIn;
 
 /**
  * The scores of every item for one researcher under one model version, into a per-thread
- * {@link ScoringWorkspace}: fold-in of x_u ({@link FoldIn}), CF scores Y·x_u by one blocked
- * matrix–vector product, the mean semantic score over the neighbour lists ({@link SemanticScorer}) and
- * the fusion rule ({@link ScoreFusion}). The stream (per event, with the researcher's previous vector as
- * a warm start) and the batch path ({@link OneResearcherScoring}, without one) both run this code.
+ * {@link ScoringWorkspace}: fold-in of x_u ({@link FoldIn}), CF scores Y·x_u, the mean semantic score
+ * over the neighbour lists ({@link SemanticScorer}) and the fusion rule ({@link ScoreFusion}). The
+ * stream (per event, with the researcher's previous vector as a warm start) and the batch path
+ * ({@link OneResearcherScoring}, without one) both run this code.
  *
  * <p>Without a warm start the fold-in is exact (Cholesky): it is the solution itself, so the batch
  * lists depend on no tolerance and are bit for bit what they were before the workspace, and at k = 64
@@ -18,17 +19,25 @@ import org.congener.core.factorisation.FoldIn;
  * the kept vector. With a warm start CG runs to ‖r‖ ≤ {@link FoldIn#CONVERGED_RELATIVE_RESIDUAL}·‖b‖,
  * within about 1e-10 of the exact vector, so the stream's top-N is the batch top-N.
  *
+ * <p>The CF product reads a second copy of Y laid out factor by factor ({@link FactorColumns}: for
+ * each factor, every item's value side by side, as floats when Y's entries all are floats), while
+ * the fold-in goes on reading Y row by row. In that layout a vector of lanes holds one score per
+ * item, each summed in its own lane by fused multiply-adds over the factors in order
+ * ({@link DenseKernels#multiplyFactorMajor}), so no score needs a horizontal sum across lanes, and
+ * in a batch ({@link #multiplyBatch}) each widened block of factors serves a group of vectors at
+ * once. A researcher scored alone ({@link #score}) and in a batch gets the same sums in the same
+ * order, hence the same bits, which is what lets the stream's top-N equal the batch top-N of
+ * {@link OneResearcherScoring}.
+ *
  * <p>Immutable and thread-safe; each thread passes its own workspace.
  */
 public final class ResearcherScoring {
     private static final DenseKernels KERNELS = DenseKernels.best();
 
     private final FoldIn foldIn;
-    private final FactorMatrix itemFactors;
     private final NeighbourLists neighbours;
     private final FusionSettings fusion;
-    /** Y as floats when every entry is one (published factors are), else null: see {@link #narrowed}. */
-    private final float[] narrowFactors;
+    private final FactorColumns columns;
 
     public ResearcherScoring(FoldIn foldIn, FactorMatrix itemFactors, NeighbourLists neighbours,
                              FusionSettings fusion) {
@@ -40,39 +49,25 @@ public final class ResearcherScoring {
             throw new IllegalArgumentException("fold-in has rank " + foldIn.rank() + ", factors " + itemFactors.rank());
         }
         this.foldIn = foldIn;
-        this.itemFactors = itemFactors;
         this.neighbours = neighbours;
         this.fusion = fusion;
-        this.narrowFactors = narrowed(itemFactors.data());
+        this.columns = FactorColumns.of(itemFactors);
     }
 
     /**
-     * The factors as floats when that loses nothing (each entry is a float value), else null. The CF
-     * product then reads half the bytes and still gives the double product bit for bit
-     * ({@link DenseKernels#multiply(float[], int, int, int, double[], int, double[], int, double[])}).
+     * Whether the CF product reads the factors as floats: when every entry is a float value, which
+     * halves the bytes read and changes no bit of the scores.
      */
-    static float[] narrowed(double[] data) {
-        float[] narrow = new float[data.length];
-        for (int t = 0; t < data.length; t++) {
-            narrow[t] = (float) data[t];
-            if (narrow[t] != data[t]) {
-                return null;
-            }
-        }
-        return narrow;
-    }
-
-    /** Whether the CF product reads the factors as floats. */
     public boolean readsFloatFactors() {
-        return narrowFactors != null;
+        return columns.floats();
     }
 
     public int itemCount() {
-        return itemFactors.rows();
+        return columns.items();
     }
 
     public int rank() {
-        return itemFactors.rank();
+        return columns.rank();
     }
 
     public FusionSettings fusion() {
@@ -106,11 +101,7 @@ public final class ResearcherScoring {
         check(items, strengths, ws);
         ws.sortItems(items, strengths);
         foldInto(items, strengths, warmStart, ws);
-        if (narrowFactors != null) {
-            KERNELS.multiply(narrowFactors, 0, itemCount(), rank(), ws.vector, 0, ws.cf, 0, ws.widened);
-        } else {
-            KERNELS.multiply(itemFactors.data(), 0, itemCount(), rank(), ws.vector, 0, ws.cf, 0);
-        }
+        columns.multiply(KERNELS, ws.vector, ws.cf);
         semanticAndFusion(items.length, ws);
         return ws;
     }
@@ -135,18 +126,14 @@ public final class ResearcherScoring {
     /**
      * The CF scores of every column of {@code batch}, Y·[x_1 … x_B], in one pass over the item factors:
      * each column's scores equal the single product of {@link #score} bit for bit
-     * ({@link DenseKernels#multiplyMany}). {@code ws} lends its widening scratch.
+     * ({@link DenseKernels#multiplyFactorMajorMany}). {@code ws} must fit this model (the product needs
+     * no scratch of it).
      */
     public void multiplyBatch(ScoringBatch batch, ScoringWorkspace ws) {
         if (!batch.fits(itemCount(), rank()) || !ws.fits(itemCount(), rank())) {
             throw new IllegalArgumentException("batch or workspace made for another model size");
         }
-        if (narrowFactors != null) {
-            KERNELS.multiplyMany(narrowFactors, 0, itemCount(), rank(), batch.vectors, batch.size, batch.cf, 0,
-                    ws.widened);
-        } else {
-            KERNELS.multiplyMany(itemFactors.data(), 0, itemCount(), rank(), batch.vectors, batch.size, batch.cf, 0);
-        }
+        columns.multiplyMany(KERNELS, batch.vectors, batch.size, batch.cf);
         batch.multiplied = true;
     }
 

@@ -17,8 +17,6 @@ public final class ScoringWorkspace {
     final double[] fused;
     final ScoreFusion fusion;
     final FoldIn.Workspace foldIn;
-    /** Rows of float item factors widened for the CF product. */
-    final double[] widened;
     /** The researcher's items ascending with their strengths, grown when a longer history comes. */
     int[] sortedItems = new int[16];
     double[] sortedStrengths = new double[16];
@@ -36,7 +34,6 @@ public final class ScoringWorkspace {
         fused = new double[itemCount];
         fusion = new ScoreFusion(itemCount);
         foldIn = new FoldIn.Workspace(rank);
-        widened = new double[org.congener.core.factorisation.DenseKernels.WIDEN_BLOCK_ROWS * rank];
     }
 
     public int itemCount() {

@@ -1,24 +1,24 @@
 package org.congener.core.factorisation;
 
-import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.SplittableRandom;
 
 import org.junit.jupiter.api.Test;
 
+/** The factor-major product with the factors held as floats against the same factors held as doubles. */
 class FloatFactorProductTest {
 
     @Test
     void shouldEqualTheDoubleProductOfTheWidenedFactorsBitForBitWhenFactorsAreFloats() {
         SplittableRandom random = new SplittableRandom(17);
         int[] ranks = {1, 7, 8, 9, 61, 64, 67};
-        // row counts below, at and across the widening block
-        int[] rowCounts = {0, 1, 5, DenseKernels.WIDEN_BLOCK_ROWS, DenseKernels.WIDEN_BLOCK_ROWS + 3, 1000};
+        int[] rowCounts = {0, 1, 5, 31, 35, 1000, 1003};
         for (DenseKernels kernels : new DenseKernels[] {DenseKernels.best(), DenseKernels.scalar()}) {
             for (int n : ranks) {
                 for (int rows : rowCounts) {
-                    float[] narrow = floatFactors(random, 3 + rows * n);
+                    int stride = rows + random.nextInt(20);
+                    float[] narrow = floatFactors(random, 3 + n * stride);
                     double[] wide = widened(narrow);
                     double[] x = new double[n];
                     for (int t = 0; t < n; t++) {
@@ -26,10 +26,13 @@ class FloatFactorProductTest {
                     }
                     double[] expected = new double[rows + 2];
                     double[] actual = new double[rows + 2];
-                    kernels.multiply(wide, 3, rows, n, x, 0, expected, 2);
-                    kernels.multiply(narrow, 3, rows, n, x, 0, actual, 2,
-                            new double[DenseKernels.WIDEN_BLOCK_ROWS * n]);
-                    assertArrayEquals(expected, actual, 0.0, kernels + ", rank " + n + ", rows " + rows);
+                    kernels.multiplyFactorMajor(wide, 3, rows, stride, n, x, 0, expected, 2);
+                    kernels.multiplyFactorMajor(narrow, 3, rows, stride, n, x, 0, actual, 2);
+                    String where = kernels + ", rank " + n + ", rows " + rows + ", stride " + stride;
+                    for (int r = 0; r < rows + 2; r++) {
+                        assertEquals(Double.doubleToLongBits(expected[r]), Double.doubleToLongBits(actual[r]),
+                                where + ", cell " + r);
+                    }
                     assertEquals(0.0, actual[0] + actual[1], "nothing written before outOff");
                 }
             }
@@ -40,11 +43,12 @@ class FloatFactorProductTest {
     void shouldGiveEachVectorItsOneVectorProductBitForBitWhenSeveralAreMultipliedInOnePass() {
         SplittableRandom random = new SplittableRandom(23);
         int[] ranks = {1, 9, 64, 67};
-        int[] rowCounts = {0, 3, DenseKernels.WIDEN_BLOCK_ROWS, 2 * DenseKernels.WIDEN_BLOCK_ROWS + 5, 1000};
+        int[] rowCounts = {0, 3, 32, 69, 1000, 1001};
         for (DenseKernels kernels : new DenseKernels[] {DenseKernels.best(), DenseKernels.scalar()}) {
             for (int n : ranks) {
                 for (int rows : rowCounts) {
-                    float[] narrow = floatFactors(random, 3 + rows * n);
+                    int stride = (rows + FactorColumns.PAD - 1) / FactorColumns.PAD * FactorColumns.PAD;
+                    float[] narrow = floatFactors(random, 3 + n * stride);
                     double[] wide = widened(narrow);
                     int count = 1 + random.nextInt(9);
                     double[][] xs = new double[count + 1][n];
@@ -55,13 +59,12 @@ class FloatFactorProductTest {
                     }
                     double[][] fromFloats = new double[count + 1][rows + 2];
                     double[][] fromDoubles = new double[count + 1][rows + 2];
-                    double[] scratch = new double[DenseKernels.WIDEN_BLOCK_ROWS * n];
-                    kernels.multiplyMany(narrow, 3, rows, n, xs, count, fromFloats, 2, scratch);
-                    kernels.multiplyMany(wide, 3, rows, n, xs, count, fromDoubles, 2);
+                    kernels.multiplyFactorMajorMany(narrow, 3, rows, stride, n, xs, count, fromFloats, 2);
+                    kernels.multiplyFactorMajorMany(wide, 3, rows, stride, n, xs, count, fromDoubles, 2);
                     for (int c = 0; c <= count; c++) {
                         double[] expected = new double[rows + 2];
                         if (c < count) {
-                            kernels.multiply(narrow, 3, rows, n, xs[c], 0, expected, 2, scratch);
+                            kernels.multiplyFactorMajor(narrow, 3, rows, stride, n, xs[c], 0, expected, 2);
                         }
                         String where = kernels + ", rank " + n + ", rows " + rows + ", vector " + c + " of " + count;
                         for (int r = 0; r < rows + 2; r++) {

@@ -135,8 +135,9 @@ class ResearcherScoringTest {
     @ParameterizedTest
     @MethodSource("rulesAndSizes")
     void shouldEqualTheScoringAsItWasBitForBitWhenDataAreSeededRandom(FusionSettings fusion, int items, int rank) {
-        // the same operations in the same order: x_u by the same Cholesky, each CF score summed as the row
-        // dot product sums it, the same spread and divisions, the same normalisation and ranks
+        // the same operations in the same order: x_u by the same Cholesky, each CF score the chain of fused
+        // multiply-adds over the factors in order, the same spread and divisions, the same normalisation
+        // and ranks
         for (boolean floats : new boolean[] {false, true}) {
             Model model = Model.random(items, rank, 21L + rank, floats);
             ResearcherScoring scoring = model.scoring(fusion);
@@ -150,6 +151,7 @@ class ResearcherScoringTest {
                         fusion, h.items(), h.strengths());
                 String where = fusion.rule() + ", " + size + " items:";
                 assertSameScores(before, scoring.score(h.items(), h.strengths(), null, ws), where);
+                assertCfWithinRoundingOfAPlainLoop(model.y(), ws, where);
                 OneResearcherScoring.Scores batch = OneResearcherScoring.score(model.foldIn(), model.y(), model.neighbours(),
                         fusion, h.items(), h.strengths());
                 assertSameScores(batch, ws, where + " batch");
@@ -161,6 +163,27 @@ class ResearcherScoringTest {
                 assertEquals(size, ws.researcherItems());
                 assertEquals(0, ws.foldInSteps(), "no warm start: exact fold-in");
             }
+        }
+    }
+
+    /**
+     * Each CF score against x·y_i summed by a plain double loop: the chain and the loop are each within
+     * γ_k·Σ_t |y_it·x_t| of the exact sum (γ_k = k·u/(1 − k·u), u the unit roundoff), so they differ by
+     * at most 2·γ_k·Σ_t |y_it·x_t|, below 2.01·k·u·Σ_t |y_it·x_t| at these ranks.
+     */
+    private static void assertCfWithinRoundingOfAPlainLoop(FactorMatrix y, ScoringWorkspace ws, String where) {
+        int k = ws.rank();
+        for (int i = 0; i < ws.itemCount(); i++) {
+            double plain = 0;
+            double magnitude = 0;
+            for (int t = 0; t < k; t++) {
+                double p = y.get(i, t) * ws.vector(t);
+                plain += p;
+                magnitude += Math.abs(p);
+            }
+            double bound = 2.01 * k * (Math.ulp(1.0) / 2) * magnitude;
+            assertTrue(Math.abs(ws.cf(i) - plain) <= bound,
+                    where + " cf[" + i + "] " + ws.cf(i) + " vs plain " + plain + ", bound " + bound);
         }
     }
 
@@ -280,9 +303,10 @@ class ResearcherScoringTest {
             SplittableRandom random = new SplittableRandom(12);
             ScoringWorkspace alone = scoring.newWorkspace();
             ScoringWorkspace batched = scoring.newWorkspace();
-            ScoringBatch batch = scoring.newBatch(5);
-            // batches filled to capacity and short ones, reused; warm starts on every other researcher
-            for (int size : new int[] {5, 3, 1, 5}) {
+            ScoringBatch batch = scoring.newBatch(9);
+            // every size from one to capacity, reused, so groups of four vectors and every remainder are
+            // multiplied; warm starts on every other researcher
+            for (int size : new int[] {9, 4, 1, 8, 5, 2, 7, 3, 6}) {
                 History[] histories = new History[size];
                 double[][] starts = new double[size][];
                 batch.clear();
@@ -294,7 +318,7 @@ class ResearcherScoringTest {
                     scoring.foldIn(histories[b].items(), histories[b].strengths(), starts[b], batched);
                     assertEquals(b, batch.add(kept(batched)));
                 }
-                assertEquals(size == 5, batch.isFull());
+                assertEquals(size == 9, batch.isFull());
                 scoring.multiplyBatch(batch, batched);
                 for (int b = 0; b < size; b++) {
                     History h = histories[b];

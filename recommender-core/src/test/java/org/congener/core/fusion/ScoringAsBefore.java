@@ -1,15 +1,16 @@
 package org.congener.core.fusion;
 
 import java.util.Arrays;
-import org.congener.core.factorisation.DenseKernels;
 import org.congener.core.factorisation.FactorMatrix;
 import org.congener.core.factorisation.FoldIn;
 
 /**
  * The reference the workspace is checked against: {@code OneResearcherScoring.score} and the fusion
- * of {@code FusedScorer} as they were at commit 306a727, before the workspace — allocating, one dot
- * product per compound, boxed sorts — kept here line for line so the new code is compared with the old
- * arithmetic and not with itself.
+ * of {@code FusedScorer} as they were at commit 306a727, before the workspace — allocating, one product
+ * per compound, boxed sorts — kept here line for line so the new code is compared with the old
+ * arithmetic and not with itself. One change since: each CF score is the sequential chain of fused
+ * multiply-adds over the factors in order ({@link #cf}), the sum the factor-major product computes,
+ * where it was the row dot product of the kernels.
  */
 final class ScoringAsBefore {
     private ScoringAsBefore() {
@@ -23,13 +24,21 @@ final class ScoringAsBefore {
         int[] sorted = items.clone();
         Arrays.sort(sorted);
         double[] cf = new double[n];
-        DenseKernels kernels = DenseKernels.best();
         for (int i = 0; i < n; i++) {
-            cf[i] = kernels.dot(x, 0, itemFactors.data(), itemFactors.offset(i), k);
+            cf[i] = cf(x, itemFactors, i, k);
         }
         double[] semantic = meanSemantic(sorted, neighbours, n);
         double[] fused = fuse(fusion, cf.clone(), semantic.clone(), sorted);
         return new OneResearcherScoring.Scores(x, cf, semantic, fused);
+    }
+
+    /** x·y_i as s ← fma(y_it, x_t, s) for t = 0 … k−1 from 0.0, one rounding per factor. */
+    static double cf(double[] x, FactorMatrix itemFactors, int item, int k) {
+        double s = 0.0;
+        for (int t = 0; t < k; t++) {
+            s = Math.fma(itemFactors.get(item, t), x[t], s);
+        }
+        return s;
     }
 
     /** SemanticScorer with SemanticAggregation.MEAN over the researcher's items in ascending order. */
