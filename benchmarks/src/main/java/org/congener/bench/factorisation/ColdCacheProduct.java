@@ -62,7 +62,7 @@ public final class ColdCacheProduct {
             double[] hotBatch = time(repetitions, () -> columns.multiplyMany(kernels, xs, batch, outs), null);
             double[] coldBatch = time(repetitions, () -> columns.multiplyMany(kernels, xs, batch, outs), evict);
             if (round == 1) {
-                long floatBytes = (long) columns.stride() * rank * 4;
+                long floatBytes = (long) columns.paddedItems() * rank * 4;
                 report("doubles, row-major,    in cache", hotWide, wide.length * 8L);
                 report("floats,  factor-major, in cache", hotNarrow, floatBytes);
                 report("doubles, row-major,    evicted ", coldWide, wide.length * 8L);

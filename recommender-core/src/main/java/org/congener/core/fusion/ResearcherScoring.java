@@ -19,8 +19,9 @@ import org.congener.core.factorisation.FoldIn;
  * the kept vector. With a warm start CG runs to ‖r‖ ≤ {@link FoldIn#CONVERGED_RELATIVE_RESIDUAL}·‖b‖,
  * within about 1e-10 of the exact vector, so the stream's top-N is the batch top-N.
  *
- * <p>The CF product reads a second copy of Y laid out factor by factor ({@link FactorColumns}: for
- * each factor, every item's value side by side, as floats when Y's entries all are floats), while
+ * <p>The CF product reads a second copy of Y laid out factor by factor in panels of items
+ * ({@link FactorColumns}: within a panel, each factor's values of its items side by side, as floats
+ * when Y's entries all are floats), while
  * the fold-in goes on reading Y row by row. In that layout a vector of lanes holds one score per
  * item, each summed in its own lane by fused multiply-adds over the factors in order
  * ({@link DenseKernels#multiplyFactorMajor}), so no score needs a horizontal sum across lanes, and

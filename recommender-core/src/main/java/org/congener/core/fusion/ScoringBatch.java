@@ -5,7 +5,7 @@ package org.congener.core.fusion;
  * {@link ResearcherScoring#multiplyBatch} computes Y·[x_1 … x_B] with one pass over the item factors
  * instead of one pass per researcher. At 10,000 × 64 the factors (2.56 MB as floats) do not stay in
  * cache between the events of a busy stream thread, so one pass per event is bound by memory; one pass
- * per batch is not. The factors are laid out factor by factor ({@link
+ * per batch is not. The factors are laid out factor by factor in panels of items ({@link
  * org.congener.core.factorisation.FactorColumns}), so a lane block of items times a broadcast factor
  * of x is one fused multiply-add and no score needs a horizontal sum; each block of factors is
  * loaded and widened once for a group of the batch's vectors, which keeps the multiply-add pipes

@@ -20,7 +20,7 @@ class FactorColumnsTest {
     }
 
     @Test
-    void shouldHoldEachFactorsItemsSideBySidePaddedWithZerosToAWholeNumberOfLanes() {
+    void shouldHoldEveryFactorOfEveryItemAndZerosInTheLastPanelsPadding() {
         for (int items : new int[] {0, 1, 15, 16, 17, 257}) {
             for (boolean floats : new boolean[] {true, false}) {
                 FactorMatrix y = floats ? floatValued(items, 13, 3L) : FactorMatrix.random(items, 13, 3L);
@@ -29,10 +29,10 @@ class FactorColumnsTest {
                 assertEquals(floats || items == 0, columns.floats(), items + " items");
                 assertEquals(items, columns.items());
                 assertEquals(13, columns.rank());
-                assertTrue(columns.stride() >= items && columns.stride() < items + FactorColumns.PAD);
-                assertEquals(0, columns.stride() % FactorColumns.PAD);
+                assertTrue(columns.paddedItems() >= items && columns.paddedItems() < items + FactorColumns.PANEL);
+                assertEquals(0, columns.paddedItems() % FactorColumns.PANEL);
                 for (int t = 0; t < 13; t++) {
-                    for (int i = 0; i < columns.stride(); i++) {
+                    for (int i = 0; i < columns.paddedItems(); i++) {
                         double expected = i < items ? y.get(i, t) : 0.0;
                         assertEquals(Double.doubleToRawLongBits(expected),
                                 Double.doubleToRawLongBits(columns.get(i, t)), "item " + i + ", factor " + t);

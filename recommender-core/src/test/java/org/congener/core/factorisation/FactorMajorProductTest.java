@@ -27,11 +27,11 @@ class FactorMajorProductTest {
 
     /** Factor-major factors of {@code rows} items at rank n, at offset aOff, in both precisions. */
     private record Block(float[] floats, double[] doubles, int aOff, int rows, int stride, int n) {
-        /** @param padding 0: stride = rows; 1: padded to {@link FactorColumns#PAD} with zeros; 2: NaN padding */
+        /** @param padding 0: stride = rows; 1: padded to {@link FactorColumns#PANEL} with zeros; 2: NaN padding */
         static Block random(SplittableRandom random, int rows, int n, int padding) {
             int stride = switch (padding) {
                 case 0 -> rows;
-                case 1 -> (rows + FactorColumns.PAD - 1) / FactorColumns.PAD * FactorColumns.PAD;
+                case 1 -> (rows + FactorColumns.PANEL - 1) / FactorColumns.PANEL * FactorColumns.PANEL;
                 default -> rows + LANES + 3;
             };
             int aOff = 3;

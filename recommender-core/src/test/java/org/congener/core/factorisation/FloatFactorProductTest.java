@@ -47,7 +47,7 @@ class FloatFactorProductTest {
         for (DenseKernels kernels : new DenseKernels[] {DenseKernels.best(), DenseKernels.scalar()}) {
             for (int n : ranks) {
                 for (int rows : rowCounts) {
-                    int stride = (rows + FactorColumns.PAD - 1) / FactorColumns.PAD * FactorColumns.PAD;
+                    int stride = (rows + FactorColumns.PANEL - 1) / FactorColumns.PANEL * FactorColumns.PANEL;
                     float[] narrow = floatFactors(random, 3 + n * stride);
                     double[] wide = widened(narrow);
                     int count = 1 + random.nextInt(9);
