@@ -2,9 +2,7 @@ package org.congener.streams.model;
 
 import java.util.Arrays;
 import java.util.Collection;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.TreeSet;
 
 import org.congener.core.factorisation.AlsConfig;
@@ -18,6 +16,7 @@ import org.congener.schemas.ItemFactors;
 import org.congener.schemas.ItemNeighbours;
 import org.congener.schemas.ModelManifest;
 import org.congener.schemas.Neighbour;
+import org.congener.streams.state.SharedAsciiStrings;
 
 /**
  * One published model version, complete and immutable: every event is scored under one snapshot,
@@ -30,14 +29,14 @@ public final class LiveModel {
     private final ModelManifest manifest;
     private final ManifestSettings settings;
     private final String[] compoundIds;
-    private final Map<String, Integer> index;
+    private final CompoundIndex index;
     private final FactorMatrix itemFactors;
     private final NeighbourLists neighbours;
     private final FoldIn foldIn;
     private final ResearcherScoring scoring;
 
     private LiveModel(ModelManifest manifest, ManifestSettings settings, String[] compoundIds,
-                      Map<String, Integer> index, FactorMatrix itemFactors, NeighbourLists neighbours) {
+                      CompoundIndex index, FactorMatrix itemFactors, NeighbourLists neighbours) {
         this.manifest = manifest;
         this.settings = settings;
         this.compoundIds = compoundIds;
@@ -81,14 +80,15 @@ public final class LiveModel {
             }
         }
         String[] compoundIds = ids.toArray(String[]::new);
-        Map<String, Integer> index = new HashMap<>(compoundIds.length * 2);
         for (int i = 0; i < compoundIds.length; i++) {
-            index.put(compoundIds[i], i);
+            // the instances the profile store's reads hand out, so look-ups meet the same String
+            compoundIds[i] = SharedAsciiStrings.shared(compoundIds[i]);
         }
+        CompoundIndex index = new CompoundIndex(compoundIds);
         FactorMatrix y = new FactorMatrix(compoundIds.length, rank);
         double[] data = y.data();
         for (ItemFactors f : factors) {
-            int off = y.offset(index.get(f.compoundId()));
+            int off = y.offset(index.indexOf(f.compoundId()));
             for (int k = 0; k < rank; k++) {
                 data[off + k] = f.factors()[k];
             }
@@ -99,11 +99,11 @@ public final class LiveModel {
         Arrays.fill(nSims, new double[0]);
         for (ItemNeighbours n : neighbourRecords) {
             List<Neighbour> list = n.neighbours();
-            int row = index.get(n.compoundId());
+            int row = index.indexOf(n.compoundId());
             nIds[row] = new int[list.size()];
             nSims[row] = new double[list.size()];
             for (int t = 0; t < list.size(); t++) {
-                nIds[row][t] = index.get(list.get(t).compoundId());
+                nIds[row][t] = index.indexOf(list.get(t).compoundId());
                 nSims[row][t] = list.get(t).similarity();
             }
         }
@@ -135,8 +135,7 @@ public final class LiveModel {
 
     /** The index of a compound, or −1 when this version does not know it. */
     public int indexOf(String compoundId) {
-        Integer i = index.get(compoundId);
-        return i == null ? -1 : i;
+        return index.indexOf(compoundId);
     }
 
     public String compoundId(int index) {

@@ -55,6 +55,16 @@ class SharedAsciiStringsTest {
     }
 
     @Test
+    void shouldHandOutTheSharedInstanceWhenItWasSharedBeforeTheRead() {
+        String own = new String("CMP-model-0042");
+        assertSame(own, SharedAsciiStrings.shared(own), "the first to share an id keeps its instance");
+        assertSame(own, SharedAsciiStrings.shared(new String("CMP-model-0042")));
+        assertSame(own, read("CMP-model-0042"), "a store read returns the shared instance");
+        String accented = "CMP-\u00e9";
+        assertSame(accented, SharedAsciiStrings.shared(accented), "text that is not ASCII is returned as given");
+    }
+
+    @Test
     void shouldKeepProfileIdsSharedAcrossReadsOfTheStore() {
         InteractionProfile profile = new InteractionProfile();
         profile.add("CMP-profile-7", 1f, 1_000L, true);
