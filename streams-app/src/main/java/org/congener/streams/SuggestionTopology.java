@@ -103,8 +103,7 @@ public final class SuggestionTopology {
 
         public static Settings from(AppConfig config) {
             return new Settings(config.topicPrefix(), config.topN(), config.popularityHalfLife(), config.inStockOnly(),
-                    new SuggestionProcessor.Batching(config.batchEvents(), Duration.ofMillis(config.batchWaitMs()),
-                            config.commitWhenCaughtUp()));
+                    new SuggestionProcessor.Batching(config.batchEvents(), Duration.ofMillis(config.batchWaitMs())));
         }
 
     }

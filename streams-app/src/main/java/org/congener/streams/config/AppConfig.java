@@ -40,7 +40,6 @@ public final class AppConfig extends AbstractConfig {
     public static final String ONTOLOGY_FILE = "ontology.file";
     public static final String BATCH_EVENTS = "scoring.batch.events";
     public static final String BATCH_WAIT_MS = "scoring.batch.wait.ms";
-    public static final String COMMIT_WHEN_CAUGHT_UP = "commit.when.caught.up";
     public static final String TOPIC_PARTITIONS = "topic.partitions";
     public static final String TOPIC_REPLICATION_FACTOR = "topic.replication.factor";
 
@@ -102,11 +101,6 @@ public final class AppConfig extends AbstractConfig {
             .define(BATCH_WAIT_MS, Type.LONG, 5L, Range.between(1L, 10_000L), Importance.LOW,
                     "Longest wall-clock wait, in milliseconds, before a partly filled batch is scored and its"
                             + " lists published; under exactly-once readers see them at the next commit.")
-            .define(COMMIT_WHEN_CAUGHT_UP, Type.BOOLEAN, true, Importance.LOW,
-                    "Commit as soon as a partly filled batch is published because its wait ran out (the"
-                            + " stream thread has caught up with its input), instead of at the next commit"
-                            + " interval, so that under exactly-once readers see the lists sooner. Under load"
-                            + " batches fill first and commits follow commit.interval.ms.")
             .define(TOPIC_PARTITIONS, Type.INT, DEFAULT_PARTITIONS, Range.between(1, 1000), Importance.LOW,
                     "Partitions of each topic when Congener creates its topics.")
             .define(TOPIC_REPLICATION_FACTOR, Type.SHORT, (short) 1, Range.between(1, 7), Importance.LOW,
@@ -197,10 +191,6 @@ public final class AppConfig extends AbstractConfig {
 
     public long batchWaitMs() {
         return getLong(BATCH_WAIT_MS);
-    }
-
-    public boolean commitWhenCaughtUp() {
-        return getBoolean(COMMIT_WHEN_CAUGHT_UP);
     }
 
     public int topicPartitions() {

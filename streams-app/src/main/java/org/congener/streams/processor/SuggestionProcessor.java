@@ -60,20 +60,11 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
     /**
      * How events are gathered before their lists are scored and published: up to {@code events} at a
      * time, and no batch waits longer than {@code longestWait} of wall-clock time. One event publishes each
-     * list while its event is processed. With {@code commitWhenCaughtUp}, a batch published because its
-     * wait ran out (the input did not fill it in time, so the thread has caught up) is followed by a
-     * commit request: under exactly-once a list is visible to readers only after a commit, and a thread
-     * with nothing else to do need not wait for the commit interval. Under load batches fill before their
-     * wait runs out, no commit is requested, and commits follow the commit interval.
+     * list while its event is processed.
      */
-    public record Batching(int events, java.time.Duration longestWait, boolean commitWhenCaughtUp) {
+    public record Batching(int events, java.time.Duration longestWait) {
         /** Each list published while its event is processed. */
         public static final Batching NONE = new Batching(1, java.time.Duration.ofMillis(5));
-
-        /** Without commit requests: commits follow the commit interval alone. */
-        public Batching(int events, java.time.Duration longestWait) {
-            this(events, longestWait, false);
-        }
 
         public Batching {
             if (events < 1) {
@@ -237,12 +228,8 @@ public final class SuggestionProcessor implements Processor<String, UsageEvent, 
 
     private void armFlushTimer() {
         if (flushTimer == null) {
-            flushTimer = context.schedule(batching.longestWait(), PunctuationType.WALL_CLOCK_TIME, now -> {
-                publishWaiting(null);
-                if (batching.commitWhenCaughtUp()) {
-                    context.commit();
-                }
-            });
+            flushTimer = context.schedule(batching.longestWait(), PunctuationType.WALL_CLOCK_TIME,
+                    now -> publishWaiting(null));
         }
     }
 

@@ -101,38 +101,6 @@ class PendingListsRecoveryTest {
         assertFalse(timers.get(1).cancelled());
     }
 
-    @Test
-    void shouldRequestACommitWhenAPartlyFilledBatchRanOutOfWaitAndNotWhenTheBatchFilled() {
-        MockProcessorContext<String, byte[]> context = contextWithStores();
-        SuggestionProcessor processor = processor(new SuggestionProcessor.Batching(2, LONG_WAIT, true));
-        processor.init(context);
-
-        processor.process(event("e1", "ada", "c-ethanol"));
-        processor.process(event("e2", "ben", "c-acetone"));
-        assertEquals(2, context.forwarded().size(), "a full batch is published at once");
-        assertFalse(context.committed(), "a full batch means more input may wait: the commit interval decides");
-
-        processor.process(event("e3", "ada", "c-toluene"));
-        List<MockProcessorContext.CapturedPunctuator> timers = context.scheduledPunctuators();
-        timers.get(timers.size() - 1).getPunctuator().punctuate(context.currentSystemTimeMs());
-        assertEquals(3, context.forwarded().size());
-        assertTrue(context.committed(), "the wait ran out: the thread has caught up and commits now");
-    }
-
-    @Test
-    void shouldLeaveCommitsToTheIntervalWhenNotAskedToCommitOnceCaughtUp() {
-        MockProcessorContext<String, byte[]> context = contextWithStores();
-        SuggestionProcessor processor = processor(new SuggestionProcessor.Batching(2, LONG_WAIT, false));
-        processor.init(context);
-
-        processor.process(event("e1", "ada", "c-ethanol"));
-        List<MockProcessorContext.CapturedPunctuator> timers = context.scheduledPunctuators();
-        timers.get(timers.size() - 1).getPunctuator().punctuate(context.currentSystemTimeMs());
-
-        assertEquals(1, context.forwarded().size());
-        assertFalse(context.committed());
-    }
-
     /** A task's context holding the processor's four stores, in memory. */
     private static MockProcessorContext<String, byte[]> contextWithStores() {
         MockProcessorContext<String, byte[]> context = new MockProcessorContext<>(new Properties());
@@ -145,10 +113,6 @@ class PendingListsRecoveryTest {
     }
 
     private static SuggestionProcessor processor() {
-        return processor(new SuggestionProcessor.Batching(8, LONG_WAIT));
-    }
-
-    private static SuggestionProcessor processor(SuggestionProcessor.Batching batching) {
         InMemoryTable<Researcher> researchers = new InMemoryTable<>();
         Fixtures.researchers().forEach(r -> researchers.accept(r.researcherId(), r));
         InMemoryTable<CatalogEntry> catalog = new InMemoryTable<>();
@@ -158,7 +122,8 @@ class PendingListsRecoveryTest {
         double halfLifeMs = Duration.ofDays(30).toMillis();
         return new SuggestionProcessor(stores, new HybridScorer(new ColdStartScorer(halfLifeMs)), () -> null,
                 InteractionWeights.defaults(), halfLifeMs, 3, false, null,
-                Fixtures.TOPICS.suggestions().valueSerde().serializer(), batching);
+                Fixtures.TOPICS.suggestions().valueSerde().serializer(),
+                new SuggestionProcessor.Batching(8, LONG_WAIT));
     }
 
     private static Record<String, UsageEvent> event(String id, String researcher, String compound) {
