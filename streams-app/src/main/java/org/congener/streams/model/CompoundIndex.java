@@ -1,20 +1,24 @@
 package org.congener.streams.model;
 
+import org.congener.streams.state.InteractionProfile;
+
 /**
  * A version's compound ids to their item indices: open addressing over one int array holding, per
- * slot, the id's hash and its index + 1 side by side. The stream looks up every compound of the
- * researcher's history at every event (hundreds for a heavy user); a map of boxed indices costs a
- * table slot, a node, the key and a boxed value per look-up, each a likely cache miss at 10,000 ids.
- * Here a look-up reads one slot pair and the id array, and compares the text only when the hashes
- * agree and the two Strings are not one instance (ids read from the stores are shared with the
- * version's own: see {@code SharedAsciiStrings}). Immutable.
+ * slot, the id's hash and its index + 1 side by side, with the ids' ASCII bytes packed in one array
+ * beside. The stream looks up every compound of the researcher's history at every event (hundreds
+ * for a heavy user); a map of boxed indices costs a table slot, a node, the key and a boxed value per
+ * look-up, each a likely cache miss at 10,000 ids. Here a look-up by the bytes of a stored profile
+ * reads one slot pair and compares the text within the packed array, and makes no String. Immutable.
  */
-final class CompoundIndex {
+final class CompoundIndex implements InteractionProfile.IdLookup {
 
     private final String[] ids;
     /** slot s: pairs[2s] = hash, pairs[2s + 1] = index + 1 (0: empty). */
     private final int[] pairs;
     private final int mask;
+    /** Id i's ASCII bytes at packed[packedAt[i] .. packedAt[i + 1]); an id that is not ASCII has none. */
+    private final byte[] packed;
+    private final int[] packedAt;
 
     /** @param ids distinct ids; index i is ids[i] */
     CompoundIndex(String[] ids) {
@@ -34,10 +38,47 @@ final class CompoundIndex {
             pairs[2 * s] = hash;
             pairs[2 * s + 1] = i + 1;
         }
+        java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
+        this.packedAt = new int[ids.length + 1];
+        for (int i = 0; i < ids.length; i++) {
+            if (isAscii(ids[i])) {
+                byte[] text = ids[i].getBytes(java.nio.charset.StandardCharsets.US_ASCII);
+                bytes.write(text, 0, text.length);
+            }
+            packedAt[i + 1] = bytes.size();
+        }
+        this.packed = bytes.toByteArray();
+    }
+
+    private static boolean isAscii(String id) {
+        for (int t = 0; t < id.length(); t++) {
+            char c = id.charAt(t);
+            if (c < 1 || c > 0x7F) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    @Override
+    public int indexOf(byte[] bytes, int at, int length, int hash) {
+        for (int s = spread(hash) & mask; ; s = (s + 1) & mask) {
+            int slot = pairs[2 * s + 1];
+            if (slot == 0) {
+                return -1;
+            }
+            int i = slot - 1;
+            // an id that is not ASCII packs no bytes and cannot be this ASCII text
+            if (pairs[2 * s] == hash && packedAt[i + 1] - packedAt[i] == length
+                    && java.util.Arrays.equals(packed, packedAt[i], packedAt[i + 1], bytes, at, at + length)) {
+                return i;
+            }
+        }
     }
 
     /** The index of {@code id}, or −1. */
-    int indexOf(String id) {
+    @Override
+    public int indexOf(String id) {
         int hash = id.hashCode();
         for (int s = spread(hash) & mask; ; s = (s + 1) & mask) {
             int at = pairs[2 * s + 1];

@@ -16,7 +16,7 @@ import org.congener.schemas.ItemFactors;
 import org.congener.schemas.ItemNeighbours;
 import org.congener.schemas.ModelManifest;
 import org.congener.schemas.Neighbour;
-import org.congener.streams.state.SharedAsciiStrings;
+import org.congener.streams.state.InteractionProfile;
 
 /**
  * One published model version, complete and immutable: every event is scored under one snapshot,
@@ -80,10 +80,6 @@ public final class LiveModel {
             }
         }
         String[] compoundIds = ids.toArray(String[]::new);
-        for (int i = 0; i < compoundIds.length; i++) {
-            // the instances the profile store's reads hand out, so look-ups meet the same String
-            compoundIds[i] = SharedAsciiStrings.shared(compoundIds[i]);
-        }
         CompoundIndex index = new CompoundIndex(compoundIds);
         FactorMatrix y = new FactorMatrix(compoundIds.length, rank);
         double[] data = y.data();
@@ -136,6 +132,11 @@ public final class LiveModel {
     /** The index of a compound, or −1 when this version does not know it. */
     public int indexOf(String compoundId) {
         return index.indexOf(compoundId);
+    }
+
+    /** The index of the compound of a profile's entry at {@code p}, or −1 when this version does not know it. */
+    public int indexOf(InteractionProfile profile, int p) {
+        return profile.indexIn(index, p);
     }
 
     public String compoundId(int index) {

@@ -276,7 +276,7 @@ public final class HybridScorer implements SuggestionScorer {
             double halfLifeMs = halfLife == null ? 0 : halfLife.toMillis();
             int n = 0;
             for (int entry = 0; entry < profile.size(); entry++) {
-                int i = model.indexOf(profile.compoundId(entry));
+                int i = model.indexOf(profile, entry);
                 double strength = profile.strengthAt(entry, atEpochMs, halfLifeMs);
                 if (i >= 0 && strength > 0) {
                     byEntry[entry] = strength;

@@ -1,5 +1,6 @@
 package org.congener.streams.state;
 
+import java.nio.charset.StandardCharsets;
 import java.util.AbstractList;
 import java.util.Arrays;
 import java.util.List;
@@ -14,8 +15,13 @@ import java.util.List;
  * <p>The entries are held column by column in first-seen order (position p in every array is one
  * compound), not as a map of entry objects: the profile is read from the store and written back at
  * every event, and a heavy user's has hundreds of entries, so a map would cost an entry object, a map
- * node and a String per compound per event. Look-up by id goes through a small open-addressing table
- * of positions, built on the first look-up of a profile that has more than a few entries.
+ * node and a String per compound per event. An id read from the store stays a range of the stored
+ * bytes, with its hash, until something asks for it as a String: the stream looks ids up in the live
+ * version's index by those bytes ({@link #indexIn}) and writes them back by copying them, so a
+ * profile passes through an event without one String made per compound (the bytes were just read and
+ * sit in cache; Strings kept elsewhere would be spread over the heap). Look-up by id compares hashes
+ * through a small open-addressing table of positions, built on the first look-up of a profile that
+ * has more than a few entries.
  */
 public final class InteractionProfile {
 
@@ -26,7 +32,14 @@ public final class InteractionProfile {
     /** Up to this many entries a look-up scans the ids instead of building the table. */
     private static final int SCANNED_AT_MOST = 8;
 
+    /** The id as a String; null for an id still only in {@link #stored}, until asked for. */
     private String[] ids;
+    /** The bytes the profile was read from, or null; an id at {@code idAt[p] ≥ 0} is ASCII there. */
+    private byte[] stored;
+    private int[] idAt;
+    private int[] idLength;
+    /** String.hashCode of each id. */
+    private int[] idHash;
     private float[] strengths;
     private int[] eventCounts;
     private long[] lastSeen;
@@ -45,6 +58,9 @@ public final class InteractionProfile {
     InteractionProfile(int capacity) {
         int room = Math.max(1, capacity);
         ids = new String[room];
+        idAt = new int[room];
+        idLength = new int[room];
+        idHash = new int[room];
         strengths = new float[room];
         eventCounts = new int[room];
         lastSeen = new long[room];
@@ -53,20 +69,57 @@ public final class InteractionProfile {
 
     /** Adds a line for a compound not yet in the profile (the caller knows it is not), at the end. */
     void append(String compoundId, float strength, int events, long lastSeenEpochMs, boolean used) {
+        int p = appendColumns(strength, events, lastSeenEpochMs, used);
+        ids[p] = compoundId;
+        idAt[p] = -1;
+        idHash[p] = compoundId.hashCode();
+        indexNewEntry();
+    }
+
+    /**
+     * {@link #append} for an id that is the {@code length} ASCII bytes (1 to 127 each) at
+     * {@code bytes[at..]}, the profile's stored value: kept as that range until asked for as a String.
+     */
+    void appendStored(byte[] bytes, int at, int length, float strength, int events, long lastSeenEpochMs,
+                      boolean used) {
+        if (stored != bytes) {
+            if (stored != null) {
+                throw new IllegalStateException("a profile's stored ids come from one value");
+            }
+            stored = bytes;
+        }
+        int p = appendColumns(strength, events, lastSeenEpochMs, used);
+        idAt[p] = at;
+        idLength[p] = length;
+        // String.hashCode of the same text (Latin-1), so stored and String ids compare by hash
+        int hash = 0;
+        for (int i = at; i < at + length; i++) {
+            hash = 31 * hash + bytes[i];
+        }
+        idHash[p] = hash;
+        indexNewEntry();
+    }
+
+    private int appendColumns(float strength, int events, long lastSeenEpochMs, boolean used) {
         if (size == ids.length) {
             int room = 2 * ids.length;
             ids = Arrays.copyOf(ids, room);
+            idAt = Arrays.copyOf(idAt, room);
+            idLength = Arrays.copyOf(idLength, room);
+            idHash = Arrays.copyOf(idHash, room);
             strengths = Arrays.copyOf(strengths, room);
             eventCounts = Arrays.copyOf(eventCounts, room);
             lastSeen = Arrays.copyOf(lastSeen, room);
             usedFlags = Arrays.copyOf(usedFlags, room);
         }
-        ids[size] = compoundId;
         strengths[size] = strength;
         eventCounts[size] = events;
         lastSeen[size] = lastSeenEpochMs;
         usedFlags[size] = used;
-        size++;
+        return size++;
+    }
+
+    private void indexNewEntry() {
         if (slots != null) {
             if (2 * size > slots.length) {
                 slots = null;
@@ -193,7 +246,45 @@ public final class InteractionProfile {
 
     /** The compound of the entry at position {@code p} (0 ≤ p &lt; {@link #size()}, first-seen order). */
     public String compoundId(int p) {
-        return ids[check(p)];
+        String id = ids[check(p)];
+        if (id == null) {
+            id = new String(stored, idAt[p], idLength[p], StandardCharsets.US_ASCII);
+            ids[p] = id;
+        }
+        return id;
+    }
+
+    /** Looks a compound up by its id's text, as a String or as ASCII bytes. */
+    public interface IdLookup {
+        /** The index of {@code id}, or −1. */
+        int indexOf(String id);
+
+        /**
+         * The index of the id whose text is the {@code length} ASCII bytes at {@code bytes[at..]} and
+         * whose String.hashCode is {@code hash}, or −1.
+         */
+        int indexOf(byte[] bytes, int at, int length, int hash);
+    }
+
+    /** The index of the entry at {@code p}'s compound in {@code lookup}, read from the stored bytes when it has them. */
+    public int indexIn(IdLookup lookup, int p) {
+        check(p);
+        return ids[p] == null ? lookup.indexOf(stored, idAt[p], idLength[p], idHash[p]) : lookup.indexOf(ids[p]);
+    }
+
+    /** Bytes {@link #putId} writes for the entry at {@code p}. */
+    int idBytes(int p) {
+        return ids[check(p)] == null ? 2 + idLength[p] : ModifiedUtf8.length(ids[p]);
+    }
+
+    /** Writes the id of the entry at {@code p} as {@link ModifiedUtf8#put} does; a stored id is copied. */
+    void putId(java.nio.ByteBuffer out, int p) {
+        if (ids[check(p)] == null) {
+            out.putShort((short) idLength[p]);
+            out.put(stored, idAt[p], idLength[p]);
+        } else {
+            ModifiedUtf8.put(out, ids[p]);
+        }
     }
 
     /** The stored strength of the entry at {@code p}, as of its last-seen time. */
@@ -214,7 +305,7 @@ public final class InteractionProfile {
     }
 
     private Entry entry(int p) {
-        return new Entry(ids[check(p)], strengths[p], eventCounts[p], lastSeen[p], usedFlags[p]);
+        return new Entry(compoundId(p), strengths[p], eventCounts[p], lastSeen[p], usedFlags[p]);
     }
 
     private int check(int p) {
@@ -229,7 +320,7 @@ public final class InteractionProfile {
         int hash = compoundId.hashCode();
         if (size <= SCANNED_AT_MOST) {
             for (int p = 0; p < size; p++) {
-                if (ids[p].hashCode() == hash && ids[p].equals(compoundId)) {
+                if (idHash[p] == hash && sameId(p, compoundId)) {
                     return p;
                 }
             }
@@ -244,16 +335,34 @@ public final class InteractionProfile {
         int mask = slots.length - 1;
         for (int s = spread(hash) & mask; slots[s] != 0; s = (s + 1) & mask) {
             int p = slots[s] - 1;
-            if (ids[p].hashCode() == hash && ids[p].equals(compoundId)) {
+            if (idHash[p] == hash && sameId(p, compoundId)) {
                 return p;
             }
         }
         return -1;
     }
 
+    /** Whether the entry at {@code p} is {@code compoundId}, compared without making a String of a stored id. */
+    private boolean sameId(int p, String compoundId) {
+        if (ids[p] != null) {
+            return ids[p].equals(compoundId);
+        }
+        int length = idLength[p];
+        if (compoundId.length() != length) {
+            return false;
+        }
+        int at = idAt[p];
+        for (int i = 0; i < length; i++) {
+            if (compoundId.charAt(i) != stored[at + i]) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     private void place(int p) {
         int mask = slots.length - 1;
-        int s = spread(ids[p].hashCode()) & mask;
+        int s = spread(idHash[p]) & mask;
         while (slots[s] != 0) {
             s = (s + 1) & mask;
         }

@@ -36,7 +36,7 @@ public final class InteractionProfileSerde implements Serde<InteractionProfile> 
         int size = 1 + 4 + 2;
         int entries = profile.size();
         for (int p = 0; p < entries; p++) {
-            size += ModifiedUtf8.length(profile.compoundId(p)) + 4 + 4 + 8 + 1;
+            size += profile.idBytes(p) + 4 + 4 + 8 + 1;
         }
         if (vector != null) {
             size += ModifiedUtf8.length(version) + 4 * vector.length;
@@ -45,7 +45,7 @@ public final class InteractionProfileSerde implements Serde<InteractionProfile> 
         out.put(FORMAT);
         out.putInt(entries);
         for (int p = 0; p < entries; p++) {
-            ModifiedUtf8.put(out, profile.compoundId(p));
+            profile.putId(out, p);
             out.putFloat(profile.strength(p));
             out.putInt(profile.events(p));
             out.putLong(profile.lastSeenEpochMs(p));
@@ -78,7 +78,18 @@ public final class InteractionProfileSerde implements Serde<InteractionProfile> 
             }
             InteractionProfile profile = new InteractionProfile(count);
             for (int i = 0; i < count; i++) {
-                profile.append(ModifiedUtf8.get(in), in.getFloat(), in.getInt(), in.getLong(), (in.get() & 1) != 0);
+                int length = in.getShort() & 0xFFFF;
+                int at = in.position();
+                if (ModifiedUtf8.isPlainAscii(bytes, at, length)) {
+                    // the id stays a range of these bytes (see InteractionProfile)
+                    in.position(at + length);
+                    profile.appendStored(bytes, at, length, in.getFloat(), in.getInt(), in.getLong(),
+                            (in.get() & 1) != 0);
+                } else {
+                    in.position(at - 2);
+                    profile.append(ModifiedUtf8.get(in), in.getFloat(), in.getInt(), in.getLong(),
+                            (in.get() & 1) != 0);
+                }
             }
             if (format == FORMAT_WITHOUT_VECTOR) {
                 return profile;

@@ -7,6 +7,7 @@ import java.io.DataOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
+import java.nio.charset.StandardCharsets;
 
 /**
  * Strings in the form of {@link java.io.DataOutput#writeUTF} (an unsigned 16-bit byte count, then
@@ -63,7 +64,7 @@ final class ModifiedUtf8 {
         }
         in.position(in.position() + count);
         if (ascii) {
-            return SharedAsciiStrings.of(array, from, count);
+            return new String(array, from, count, StandardCharsets.US_ASCII);
         }
         byte[] framed = new byte[2 + count];
         framed[0] = (byte) (count >>> 8);
@@ -74,6 +75,23 @@ final class ModifiedUtf8 {
         } catch (IOException e) {
             throw new IllegalStateException("stored string is not modified UTF-8", e);
         }
+    }
+
+    /**
+     * Whether {@code bytes[at..at+length)} lies within the array and holds only bytes 1 to 127, text
+     * that modified UTF-8 and ASCII write alike. A range past the end is not: the caller's read then
+     * reports it cut short.
+     */
+    static boolean isPlainAscii(byte[] bytes, int at, int length) {
+        if (at + length > bytes.length) {
+            return false;
+        }
+        for (int i = at; i < at + length; i++) {
+            if (bytes[i] < 1) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static boolean isPlainAscii(String s) {

@@ -37,8 +37,26 @@ class CompoundIndexTest {
             assertEquals(expected.get(id), index.indexOf(new String(id)), id);
             assertEquals(expected.get(id), index.indexOf(id), id);
         }
+        for (String id : ids) {
+            byte[] framed = ("##" + id).getBytes(java.nio.charset.StandardCharsets.US_ASCII);
+            assertEquals(expected.get(id), index.indexOf(framed, 2, id.length(), id.hashCode()), id);
+        }
+        byte[] absent = "c-AaBB-absent".getBytes(java.nio.charset.StandardCharsets.US_ASCII);
+        assertEquals(-1, index.indexOf(absent, 0, absent.length, "c-AaBB-absent".hashCode()));
         assertEquals(-1, index.indexOf("c-AaBB-absent"));
         assertEquals(-1, index.indexOf(""));
+    }
+
+    @Test
+    void shouldFindAnIdThatIsNotAsciiByItsStringButNotByBytes() {
+        String accented = "c-\u00e9ther";
+        CompoundIndex index = new CompoundIndex(new String[] {"c-1", accented, "c-2"});
+        assertEquals(1, index.indexOf(accented));
+        byte[] latin1 = accented.getBytes(java.nio.charset.StandardCharsets.ISO_8859_1);
+        // the same Latin-1 hash, but a stored profile's bytes are ASCII only: no such text can match
+        assertEquals(-1, index.indexOf(latin1, 0, latin1.length, accented.hashCode()));
+        byte[] two = "c-2".getBytes(java.nio.charset.StandardCharsets.US_ASCII);
+        assertEquals(2, index.indexOf(two, 0, two.length, "c-2".hashCode()), "the ids after it are packed right");
     }
 
     @Test

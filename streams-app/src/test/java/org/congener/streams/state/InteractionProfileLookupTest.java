@@ -32,6 +32,10 @@ class InteractionProfileLookupTest {
                 long at = random.nextLong(0, 1_000_000);
                 boolean used = random.nextInt(3) > 0;
                 profile.add(id, weight, at, used);
+                if (random.nextInt(40) == 0) {
+                    // through the store, as at every event: ids read back stay stored bytes until asked for
+                    profile = InteractionProfileSerde.read(InteractionProfileSerde.write(profile));
+                }
                 expected.merge(id, new InteractionProfile.Entry(id, weight, 1, at, used),
                         (old, now) -> new InteractionProfile.Entry(id, old.strength() + weight, old.events() + 1,
                                 Math.max(old.lastSeenEpochMs(), at), old.used() || used));

@@ -41,6 +41,8 @@ class ProfileLayoutTest {
             byte[] written = InteractionProfileSerde.write(profile);
             assertArrayEquals(dataStreamLayout(profile), written, "round " + round);
             InteractionProfile back = InteractionProfileSerde.read(written);
+            // written back as read: stored ids are copied, not re-encoded, and must give the same bytes
+            assertArrayEquals(written, InteractionProfileSerde.write(back), "round " + round);
             assertEquals(List.copyOf(profile.entries()), List.copyOf(back.entries()), "round " + round);
             assertEquals(profile.vectorVersion(), back.vectorVersion());
             assertArrayEquals(profile.vectorUnder(profile.vectorVersion()), back.vectorUnder(back.vectorVersion()));
