@@ -80,16 +80,35 @@ public interface DenseKernels {
      * may be padded to whole vectors). Needs a.length ≥ aOff + n·stride. Modifies {@code out} in
      * [outOff, outOff+rows) only.
      */
-    void multiplyFactorMajor(double[] a, int aOff, int rows, int stride, int n, double[] x, int xOff, double[] out,
-                             int outOff);
+    default void multiplyFactorMajor(double[] a, int aOff, int rows, int stride, int n, double[] x, int xOff,
+                                     double[] out, int outOff) {
+        // factor by factor over all rows, out holding the chains, so each row's chain is in factor order
+        java.util.Arrays.fill(out, outOff, outOff + rows, 0.0);
+        for (int t = 0; t < n; t++) {
+            double xt = x[xOff + t];
+            int column = aOff + t * stride;
+            for (int i = 0; i < rows; i++) {
+                out[outOff + i] = Math.fma(a[column + i], xt, out[outOff + i]);
+            }
+        }
+    }
 
     /**
      * {@link #multiplyFactorMajor(double[], int, int, int, int, double[], int, double[], int)} with the
      * factors held as floats: each y_it is widened to double (exactly) before its multiply-add, so out
      * equals the double product of the widened factors bit for bit.
      */
-    void multiplyFactorMajor(float[] a, int aOff, int rows, int stride, int n, double[] x, int xOff, double[] out,
-                             int outOff);
+    default void multiplyFactorMajor(float[] a, int aOff, int rows, int stride, int n, double[] x, int xOff,
+                                     double[] out, int outOff) {
+        java.util.Arrays.fill(out, outOff, outOff + rows, 0.0);
+        for (int t = 0; t < n; t++) {
+            double xt = x[xOff + t];
+            int column = aOff + t * stride;
+            for (int i = 0; i < rows; i++) {
+                out[outOff + i] = Math.fma((double) a[column + i], xt, out[outOff + i]);
+            }
+        }
+    }
 
     /**
      * The factor-major product with several vectors: for c &lt; count, outs[c] gets what
@@ -97,12 +116,24 @@ public interface DenseKernels {
      * x = xs[c] (read from index 0) and out = outs[c], bit for bit, with the factors read from memory
      * once for all of them. Modifies outs[c][outOff..outOff+rows) for c &lt; count only.
      */
-    void multiplyFactorMajorMany(float[] a, int aOff, int rows, int stride, int n, double[][] xs, int count,
-                                 double[][] outs, int outOff);
+    default void multiplyFactorMajorMany(float[] a, int aOff, int rows, int stride, int n, double[][] xs, int count,
+                                         double[][] outs, int outOff) {
+        for (int c = 0; c < count; c++) {
+            multiplyFactorMajor(a, aOff, rows, stride, n, xs[c], 0, outs[c], outOff);
+        }
+    }
 
-    /** The same for factors held as doubles. */
-    void multiplyFactorMajorMany(double[] a, int aOff, int rows, int stride, int n, double[][] xs, int count,
-                                 double[][] outs, int outOff);
+    /**
+     * The same for factors held as doubles. Published factors are floats, so this serves only factor
+     * matrices that were never published (tests, a trainer's own); the plain chains are kept for it,
+     * one vector after another, and the vector implementation does not repeat them.
+     */
+    default void multiplyFactorMajorMany(double[] a, int aOff, int rows, int stride, int n, double[][] xs, int count,
+                                         double[][] outs, int outOff) {
+        for (int c = 0; c < count; c++) {
+            multiplyFactorMajor(a, aOff, rows, stride, n, xs[c], 0, outs[c], outOff);
+        }
+    }
 
     /**
      * The least and the greatest of v[from..to) by {@link Math#min} and {@link Math#max} (so −0.0 is

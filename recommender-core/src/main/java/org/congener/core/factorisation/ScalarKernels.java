@@ -76,49 +76,6 @@ final class ScalarKernels implements DenseKernels {
         }
     }
 
-    /** Factor by factor over all rows, out holding the chains, so each row's chain is in factor order. */
-    @Override
-    public void multiplyFactorMajor(double[] a, int aOff, int rows, int stride, int n, double[] x, int xOff,
-                                    double[] out, int outOff) {
-        java.util.Arrays.fill(out, outOff, outOff + rows, 0.0);
-        for (int t = 0; t < n; t++) {
-            double xt = x[xOff + t];
-            int column = aOff + t * stride;
-            for (int i = 0; i < rows; i++) {
-                out[outOff + i] = Math.fma(a[column + i], xt, out[outOff + i]);
-            }
-        }
-    }
-
-    @Override
-    public void multiplyFactorMajor(float[] a, int aOff, int rows, int stride, int n, double[] x, int xOff,
-                                    double[] out, int outOff) {
-        java.util.Arrays.fill(out, outOff, outOff + rows, 0.0);
-        for (int t = 0; t < n; t++) {
-            double xt = x[xOff + t];
-            int column = aOff + t * stride;
-            for (int i = 0; i < rows; i++) {
-                out[outOff + i] = Math.fma((double) a[column + i], xt, out[outOff + i]);
-            }
-        }
-    }
-
-    @Override
-    public void multiplyFactorMajorMany(float[] a, int aOff, int rows, int stride, int n, double[][] xs, int count,
-                                        double[][] outs, int outOff) {
-        for (int c = 0; c < count; c++) {
-            multiplyFactorMajor(a, aOff, rows, stride, n, xs[c], 0, outs[c], outOff);
-        }
-    }
-
-    @Override
-    public void multiplyFactorMajorMany(double[] a, int aOff, int rows, int stride, int n, double[][] xs, int count,
-                                        double[][] outs, int outOff) {
-        for (int c = 0; c < count; c++) {
-            multiplyFactorMajor(a, aOff, rows, stride, n, xs[c], 0, outs[c], outOff);
-        }
-    }
-
     @Override
     public void minMax(double[] v, int from, int to, double[] into) {
         double lo = Double.POSITIVE_INFINITY;

@@ -367,17 +367,6 @@ final class VectorKernels implements DenseKernels {
         lastItems(a, aOff, i, rows, stride, n, x, xOff, out, outOff);
     }
 
-    @Override
-    public void multiplyFactorMajor(double[] a, int aOff, int rows, int stride, int n, double[] x, int xOff,
-                                    double[] out, int outOff) {
-        int group = 4 * SPECIES.length();
-        int i = 0;
-        for (; i + group <= rows; i += group) {
-            fourBlocks(a, aOff + i, stride, n, x, xOff, out, outOff + i);
-        }
-        lastItems(a, aOff, i, rows, stride, n, x, xOff, out, outOff);
-    }
-
     /**
      * Items in groups of four lane blocks, and for each group the vectors four at a time: each widened
      * block of factors serves four vectors (sixteen accumulator chains, with the four blocks and a
@@ -388,26 +377,6 @@ final class VectorKernels implements DenseKernels {
      */
     @Override
     public void multiplyFactorMajorMany(float[] a, int aOff, int rows, int stride, int n, double[][] xs, int count,
-                                        double[][] outs, int outOff) {
-        int group = 4 * SPECIES.length();
-        int i = 0;
-        for (; i + group <= rows; i += group) {
-            int c = 0;
-            for (; c + 4 <= count; c += 4) {
-                fourBlocksFourVectors(a, aOff + i, stride, n, xs[c], xs[c + 1], xs[c + 2], xs[c + 3],
-                        outs[c], outs[c + 1], outs[c + 2], outs[c + 3], outOff + i);
-            }
-            for (; c < count; c++) {
-                fourBlocks(a, aOff + i, stride, n, xs[c], 0, outs[c], outOff + i);
-            }
-        }
-        for (int c = 0; c < count; c++) {
-            lastItems(a, aOff, i, rows, stride, n, xs[c], 0, outs[c], outOff);
-        }
-    }
-
-    @Override
-    public void multiplyFactorMajorMany(double[] a, int aOff, int rows, int stride, int n, double[][] xs, int count,
                                         double[][] outs, int outOff) {
         int group = 4 * SPECIES.length();
         int i = 0;
@@ -439,23 +408,6 @@ final class VectorKernels implements DenseKernels {
             s1 = widened(a, p + lanes).fma(xt, s1);
             s2 = widened(a, p + 2 * lanes).fma(xt, s2);
             s3 = widened(a, p + 3 * lanes).fma(xt, s3);
-        }
-        store(s0, s1, s2, s3, out, to);
-    }
-
-    private static void fourBlocks(double[] a, int at, int stride, int n, double[] x, int xOff, double[] out,
-                                   int to) {
-        int lanes = SPECIES.length();
-        DoubleVector s0 = DoubleVector.zero(SPECIES);
-        DoubleVector s1 = s0;
-        DoubleVector s2 = s0;
-        DoubleVector s3 = s0;
-        for (int t = 0, p = at; t < n; t++, p += stride) {
-            DoubleVector xt = DoubleVector.broadcast(SPECIES, x[xOff + t]);
-            s0 = DoubleVector.fromArray(SPECIES, a, p).fma(xt, s0);
-            s1 = DoubleVector.fromArray(SPECIES, a, p + lanes).fma(xt, s1);
-            s2 = DoubleVector.fromArray(SPECIES, a, p + 2 * lanes).fma(xt, s2);
-            s3 = DoubleVector.fromArray(SPECIES, a, p + 3 * lanes).fma(xt, s3);
         }
         store(s0, s1, s2, s3, out, to);
     }
@@ -513,58 +465,6 @@ final class VectorKernels implements DenseKernels {
         store(z0, z1, z2, z3, outZ, to);
     }
 
-    private static void fourBlocksFourVectors(double[] a, int at, int stride, int n, double[] w, double[] x,
-                                              double[] y, double[] z, double[] outW, double[] outX, double[] outY,
-                                              double[] outZ, int to) {
-        int lanes = SPECIES.length();
-        DoubleVector w0 = DoubleVector.zero(SPECIES);
-        DoubleVector w1 = w0;
-        DoubleVector w2 = w0;
-        DoubleVector w3 = w0;
-        DoubleVector x0 = w0;
-        DoubleVector x1 = w0;
-        DoubleVector x2 = w0;
-        DoubleVector x3 = w0;
-        DoubleVector y0 = w0;
-        DoubleVector y1 = w0;
-        DoubleVector y2 = w0;
-        DoubleVector y3 = w0;
-        DoubleVector z0 = w0;
-        DoubleVector z1 = w0;
-        DoubleVector z2 = w0;
-        DoubleVector z3 = w0;
-        for (int t = 0, p = at; t < n; t++, p += stride) {
-            DoubleVector f0 = DoubleVector.fromArray(SPECIES, a, p);
-            DoubleVector f1 = DoubleVector.fromArray(SPECIES, a, p + lanes);
-            DoubleVector f2 = DoubleVector.fromArray(SPECIES, a, p + 2 * lanes);
-            DoubleVector f3 = DoubleVector.fromArray(SPECIES, a, p + 3 * lanes);
-            DoubleVector b = DoubleVector.broadcast(SPECIES, w[t]);
-            w0 = f0.fma(b, w0);
-            w1 = f1.fma(b, w1);
-            w2 = f2.fma(b, w2);
-            w3 = f3.fma(b, w3);
-            b = DoubleVector.broadcast(SPECIES, x[t]);
-            x0 = f0.fma(b, x0);
-            x1 = f1.fma(b, x1);
-            x2 = f2.fma(b, x2);
-            x3 = f3.fma(b, x3);
-            b = DoubleVector.broadcast(SPECIES, y[t]);
-            y0 = f0.fma(b, y0);
-            y1 = f1.fma(b, y1);
-            y2 = f2.fma(b, y2);
-            y3 = f3.fma(b, y3);
-            b = DoubleVector.broadcast(SPECIES, z[t]);
-            z0 = f0.fma(b, z0);
-            z1 = f1.fma(b, z1);
-            z2 = f2.fma(b, z2);
-            z3 = f3.fma(b, z3);
-        }
-        store(w0, w1, w2, w3, outW, to);
-        store(x0, x1, x2, x3, outX, to);
-        store(y0, y1, y2, y3, outY, to);
-        store(z0, z1, z2, z3, outZ, to);
-    }
-
     private static void store(DoubleVector s0, DoubleVector s1, DoubleVector s2, DoubleVector s3, double[] out,
                               int to) {
         int lanes = SPECIES.length();
@@ -593,26 +493,6 @@ final class VectorKernels implements DenseKernels {
             double s = 0.0;
             for (int t = 0, p = aOff + i; t < n; t++, p += stride) {
                 s = Math.fma((double) a[p], x[xOff + t], s);
-            }
-            out[outOff + i] = s;
-        }
-    }
-
-    private static void lastItems(double[] a, int aOff, int from, int rows, int stride, int n, double[] x, int xOff,
-                                  double[] out, int outOff) {
-        int lanes = SPECIES.length();
-        int i = from;
-        for (; i < rows && i + lanes <= stride; i += lanes) {
-            DoubleVector s = DoubleVector.zero(SPECIES);
-            for (int t = 0, p = aOff + i; t < n; t++, p += stride) {
-                s = DoubleVector.fromArray(SPECIES, a, p).fma(DoubleVector.broadcast(SPECIES, x[xOff + t]), s);
-            }
-            s.intoArray(out, outOff + i, SPECIES.indexInRange(i, rows));
-        }
-        for (; i < rows; i++) {
-            double s = 0.0;
-            for (int t = 0, p = aOff + i; t < n; t++, p += stride) {
-                s = Math.fma(a[p], x[xOff + t], s);
             }
             out[outOff + i] = s;
         }

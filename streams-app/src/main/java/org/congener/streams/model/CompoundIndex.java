@@ -41,23 +41,15 @@ final class CompoundIndex implements InteractionProfile.IdLookup {
         java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
         this.packedAt = new int[ids.length + 1];
         for (int i = 0; i < ids.length; i++) {
-            if (isAscii(ids[i])) {
+            // a stored profile's ids on the byte path hold bytes 1 to 127 only, so an id with a NUL packed
+            // here is never asked for by bytes and still found by its String
+            if (ids[i].chars().allMatch(c -> c < 0x80)) {
                 byte[] text = ids[i].getBytes(java.nio.charset.StandardCharsets.US_ASCII);
                 bytes.write(text, 0, text.length);
             }
             packedAt[i + 1] = bytes.size();
         }
         this.packed = bytes.toByteArray();
-    }
-
-    private static boolean isAscii(String id) {
-        for (int t = 0; t < id.length(); t++) {
-            char c = id.charAt(t);
-            if (c < 1 || c > 0x7F) {
-                return false;
-            }
-        }
-        return true;
     }
 
     @Override
