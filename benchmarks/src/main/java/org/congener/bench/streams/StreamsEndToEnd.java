@@ -109,12 +109,26 @@ public final class StreamsEndToEnd {
                 compounds, rank, researchers, rate, seconds, burst);
 
         Path dir = Files.createTempDirectory("congener-e2e");
-        try (EmbeddedKafkaBroker broker = EmbeddedKafkaBroker.builder().dataDir(dir.resolve("broker")).port(0).start()) {
-            String bootstrap = broker.bootstrapServers();
+        // -Dbroker.process=HEAP runs the broker in a JVM of its own with that heap, as deployed; without it
+        // the broker shares this JVM (the layout of the demo and of the earlier figures)
+        String brokerHeap = System.getProperty("broker.process");
+        System.out.println(brokerHeap == null ? "broker: in this JVM"
+                : "broker: in a JVM of its own (heap " + brokerHeap + ")");
+        try (AutoCloseable broker = brokerHeap == null
+                ? EmbeddedKafkaBroker.builder().dataDir(dir.resolve("broker")).port(0).start()
+                : BrokerProcess.start(dir.resolve("broker"), brokerHeap)) {
+            String bootstrap = broker instanceof EmbeddedKafkaBroker b ? b.bootstrapServers()
+                    : ((BrokerProcess) broker).bootstrapServers();
             Workload workload = new Workload(researchers, compounds, 0);
-            RunResult app = run(broker, dir, "e2e.", null, workload, compounds, rank, rate, seconds, burst);
-            RunResult ceiling = run(broker, dir, "e2e-ceiling.", new OffersNothing(), workload, compounds, rank,
+            RunResult app = run(bootstrap, dir, "e2e.", null, workload, compounds, rank, rate, seconds, burst);
+            RunResult ceiling = run(bootstrap, dir, "e2e-ceiling.", new OffersNothing(), workload, compounds, rank,
                     0, 0, burst);
+            // -Dceiling.full.lists=true: also the pass-through publishing lists of the app's size, to part
+            // the gap between app and ceiling into publishing the lists and computing them
+            RunResult fullLists = Boolean.getBoolean("ceiling.full.lists")
+                    ? run(bootstrap, dir, "e2e-lists.", new ListsWithoutScoring(compounds), workload, compounds, rank,
+                    0, 0, burst)
+                    : null;
             // the ideal uses the core's peak rate (register FMA chains), the strictest yardstick; the rate
             // of length-64 dot products, the kernels' common shape, is printed beside it
             double fmaRate = PeakMultiplyAddRate.best(5);
@@ -127,6 +141,10 @@ public final class StreamsEndToEnd {
                     app.maxMs(), app.pacedLists());
             System.out.printf(Locale.ROOT, "ceiling (same pipeline, scorer offers nothing): %.0f events/s%n",
                     ceiling.sustainedPerSecond());
+            if (fullLists != null) {
+                System.out.printf(Locale.ROOT, "same pipeline publishing lists of the app's size without scoring:"
+                        + " %.0f events/s%n", fullLists.sustainedPerSecond());
+            }
             System.out.printf(Locale.ROOT, "work per event: %.0f multiply-adds (mean history %.1f compounds);"
                     + " one core's peak rate %.2f G multiply-adds/s: %.1f µs (at the length-64 dot rate"
                     + " %.2f G/s: %.1f µs)%n", work, workload.meanHistory(), fmaRate / 1e9, work / fmaRate * 1e6,
@@ -140,6 +158,7 @@ public final class StreamsEndToEnd {
             System.out.printf(Locale.ROOT, "interaction store: %.0f bytes per researcher over %d researchers%n",
                     app.storeBytesPerResearcher(), app.researchersStored());
             System.out.printf(Locale.ROOT, "broker and state dirs after the runs: %.1f MB%n", sizeMb(dir));
+            printTopicBytes(dir.resolve("broker"));
         } finally {
             // gigabytes of logs and state per run: a benchmark left on a machine must not fill its disk
             deleteTree(dir);
@@ -155,11 +174,10 @@ public final class StreamsEndToEnd {
     }
 
     /** One pipeline run on its own topics; {@code scorer} null is the app as it ships. */
-    private static RunResult run(EmbeddedKafkaBroker broker, Path dir, String prefix, SuggestionScorer scorer,
+    private static RunResult run(String bootstrap, Path dir, String prefix, SuggestionScorer scorer,
                                  Workload workload, int compounds, int rank, int rate, int seconds, int burst)
             throws Exception {
-        String bootstrap = broker.bootstrapServers();
-        String label = scorer == null ? "app" : "ceiling";
+        String label = scorer == null ? "app" : scorer instanceof ListsWithoutScoring ? "lists" : "ceiling";
         TopicAdmin.createAll(bootstrap, prefix, 2, (short) 1);
         Topics topics = new Topics(prefix);
         long t0 = System.nanoTime();
@@ -227,6 +245,9 @@ public final class StreamsEndToEnd {
                 series.clear();
                 try (KafkaProducer<String, String> producer = producer(bootstrap)) {
                     long start = System.nanoTime();
+                    // ties the series' nanoTimes to the JVM's uptime, the clock of GC and safepoint logs
+                    System.out.printf(Locale.ROOT, "[%s] paced run starts at nanoTime %d, JVM uptime %d ms%n", label,
+                            start, java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime());
                     for (int e = 0; e < pacedCount; e++) {
                         long due = start + (long) (e * 1e9 / rate);
                         // park, not spin: a spinning producer would take one of the machine's two cores
@@ -259,6 +280,7 @@ public final class StreamsEndToEnd {
                 long jitBefore = jitMillis();
                 long wallBefore = System.nanoTime();
                 long streamCpuBefore = streamThreadCpuNanos(prefix + "bench");
+                ThreadCpuBreakdown cpuBefore = ThreadCpuBreakdown.now();
                 double burstPerSecond = unpaced(bootstrap, topics, "b" + b + "-", burst, workload, random, producedAt,
                         latenciesNs, scorer == null ? workload : null);
                 double streamCpuPerEventUs = (streamThreadCpuNanos(prefix + "bench") - streamCpuBefore) / 1e3 / burst;
@@ -266,6 +288,7 @@ public final class StreamsEndToEnd {
                 System.out.printf(Locale.ROOT, "[%s] sustained: %d events at %.0f events/s; stream thread CPU %.0f µs per"
                         + " event (%.0f %% busy); JIT compiling %.0f %% of the time%n", label, burst, burstPerSecond,
                         streamCpuPerEventUs, 100 * streamCpuPerEventUs * burstPerSecond / 1e6, 100 * jitShare);
+                ThreadCpuBreakdown.now().printSince(cpuBefore, burst, label);
                 printCommits(label + "] [burst", metricsBefore, commitMetrics(app));
                 metricsBefore = commitMetrics(app);
                 perSecond = Math.max(perSecond, burstPerSecond);
@@ -410,6 +433,47 @@ public final class StreamsEndToEnd {
     }
 
     /** A scorer that offers nothing: the pipeline's cost without the scoring work. */
+    /**
+     * Lists of the app's size and shape (n candidates, each with three contributors and scores printed
+     * at full precision) taken from a fixed set of compounds without any arithmetic: the platform's
+     * cost of publishing and storing the app's lists, apart from scoring them.
+     */
+    static final class ListsWithoutScoring implements SuggestionScorer {
+        private static final int CONTRIBUTORS = 3;
+        private final List<String> candidates = new ArrayList<>();
+
+        ListsWithoutScoring(int compounds) {
+            // spread over the catalogue so that restricted compounds are met as in the app's lists
+            for (int c = 0; c < 200; c++) {
+                candidates.add(compoundId((int) ((long) c * 7919 % compounds)));
+            }
+        }
+
+        @Override
+        public SuggestionSource source() {
+            return SuggestionSource.HYBRID;
+        }
+
+        @Override
+        public List<ScoredCandidate> rank(ScoringInput input, int n) {
+            List<InteractionProfile.Entry> history = input.profile().entries();
+            List<org.congener.schemas.Contribution> contributors = new ArrayList<>(CONTRIBUTORS);
+            for (int i = 0; i < Math.min(CONTRIBUTORS, history.size()); i++) {
+                contributors.add(new org.congener.schemas.Contribution(
+                        history.get(history.size() - 1 - i).compoundId(), 1.0 / (i + 1.7)));
+            }
+            List<ScoredCandidate> list = new ArrayList<>(n);
+            for (int c = 0; c < candidates.size() && list.size() < n; c++) {
+                String id = candidates.get(c);
+                if (input.eligible().eligible(id)) {
+                    double score = 1.0 / (c + 1.3);
+                    list.add(new ScoredCandidate(id, score * 0.61, score * 0.39, score, contributors));
+                }
+            }
+            return list;
+        }
+    }
+
     static final class OffersNothing implements SuggestionScorer {
         @Override
         public SuggestionSource source() {
@@ -630,6 +694,20 @@ public final class StreamsEndToEnd {
 
     private static String text(byte[] bytes) {
         return new String(bytes, StandardCharsets.UTF_8);
+    }
+
+    /** Bytes of record batches per topic (log segments only: index files are preallocated). */
+    private static void printTopicBytes(Path brokerDir) throws java.io.IOException {
+        Map<String, Long> bytes = new java.util.TreeMap<>();
+        try (var files = Files.walk(brokerDir)) {
+            files.filter(f -> f.getFileName().toString().endsWith(".log") && Files.isRegularFile(f)).forEach(f -> {
+                String partitionDir = f.getParent().getFileName().toString();
+                String topic = partitionDir.substring(0, Math.max(0, partitionDir.lastIndexOf('-')));
+                bytes.merge(topic, f.toFile().length(), Long::sum);
+            });
+        }
+        bytes.entrySet().stream().sorted(Map.Entry.<String, Long>comparingByValue().reversed()).limit(12)
+                .forEach(e -> System.out.printf(Locale.ROOT, "  topic %s: %.1f MB%n", e.getKey(), e.getValue() / 1e6));
     }
 
     private static double sizeMb(Path dir) throws java.io.IOException {

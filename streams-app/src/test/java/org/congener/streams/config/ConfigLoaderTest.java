@@ -82,6 +82,24 @@ class ConfigLoaderTest {
     }
 
     @Test
+    void shouldPassCompressionToTheStreamThreadsProducerOnly() throws Exception {
+        Path file = write("producer.compression.type=lz4\n");
+        Map<String, Object> streams = ConfigLoader.load(file, Map.of(), Map.of()).streamsProperties();
+        assertEquals("lz4", streams.get("producer.compression.type"));
+        assertFalse(streams.containsKey("compression.type"), "the consumer and admin take no compression");
+        assertEquals("none", ConfigLoader.load(null, Map.of(), Map.of()).streamsProperties()
+                .get("producer.compression.type"));
+    }
+
+    @Test
+    void shouldListTheCodecsWhenCompressionIsUnknown() {
+        ConfigLoadException e = assertThrows(ConfigLoadException.class,
+                () -> ConfigLoader.load(null, Map.of(), Map.of(AppConfig.PRODUCER_COMPRESSION, "brotli")));
+        assertTrue(e.getMessage().contains("'brotli'") && e.getMessage().contains("producer.compression.type")
+                && e.getMessage().contains("zstd"), e.getMessage());
+    }
+
+    @Test
     void shouldRejectTopicPrefixThatMakesIllegalTopicNames() {
         assertThrows(ConfigLoadException.class,
                 () -> ConfigLoader.load(null, Map.of(), Map.of(AppConfig.TOPIC_PREFIX, "lab/")));
