@@ -600,19 +600,30 @@ public final class StreamsEndToEnd {
 
     private static void publishWorld(String bootstrap, Topics topics, int compounds, int rank, int researchers) {
         SplittableRandom random = new SplittableRandom(5);
+        // a record the broker refused would leave the run waiting for lists of unknown compounds or
+        // researchers: the first failure ends the run with its cause
+        java.util.concurrent.atomic.AtomicReference<Exception> failed = new java.util.concurrent.atomic.AtomicReference<>();
+        org.apache.kafka.clients.producer.Callback check = (metadata, e) -> {
+            if (e != null) {
+                failed.compareAndSet(null, e);
+            }
+        };
         try (KafkaProducer<String, String> producer = producer(bootstrap)) {
             for (int c = 0; c < compounds; c++) {
                 CatalogEntry entry = new CatalogEntry(SchemaIds.CATALOG_ENTRY, compoundId(c), "compound " + c,
                         List.of("T:" + c), c % 50 == 0 ? List.of("controlled") : List.of(), List.of("H225"), true);
                 producer.send(new ProducerRecord<>(topics.catalog().name(), entry.compoundId(),
-                        text(topics.catalog().valueSerde().serializer().serialize("", entry))));
+                        text(topics.catalog().valueSerde().serializer().serialize("", entry))), check);
             }
             for (int r = 0; r < researchers; r++) {
                 Researcher researcher = new Researcher(SchemaIds.RESEARCHER, researcherId(r), "Researcher " + r,
                         "g" + (r / 20), r % 3 == 0 ? List.of("controlled") : List.of(), true);
                 producer.send(new ProducerRecord<>(topics.researchers().name(), researcher.researcherId(),
-                        text(topics.researchers().valueSerde().serializer().serialize("", researcher))));
+                        text(topics.researchers().valueSerde().serializer().serialize("", researcher))), check);
             }
+        }
+        if (failed.get() != null) {
+            throw new IllegalStateException("publishing the catalogue and researchers failed", failed.get());
         }
         FactorMatrix y = FactorMatrix.random(compounds, rank, 3L);
         Properties p = new Properties();

@@ -32,6 +32,7 @@ public final class AppConfig extends AbstractConfig {
     public static final String COMMIT_INTERVAL_MS = "commit.interval.ms";
     public static final String PRODUCER_LINGER_MS = "producer.linger.ms";
     public static final String PRODUCER_COMPRESSION = "producer.compression.type";
+    public static final String PRODUCER_BATCH_BYTES = "producer.batch.size";
     public static final String HTTP_HOST = "http.host";
     public static final String HTTP_PORT = "http.port";
     public static final String HTTP_ADVERTISED_ADDRESS = "http.advertised.address";
@@ -76,6 +77,12 @@ public final class AppConfig extends AbstractConfig {
                             + " sending it (Kafka Streams' own default is 100). Under exactly-once every commit"
                             + " first waits for all records not yet sent; a short wait sends them while the next"
                             + " events are processed, which keeps each commit short.")
+            .define(PRODUCER_BATCH_BYTES, Type.INT, 16_384, Range.between(1_024, 16 * 1024 * 1024), Importance.LOW,
+                    "Largest batch, in bytes, the stream threads' producer sends to one partition in one go"
+                            + " (Kafka's default). At each commit the stores' caches write a commit interval's"
+                            + " lists and profiles at once, hundreds of kilobytes, which small batches split into"
+                            + " many requests: 262144 cut the brokers' and the producer's CPU per event by a"
+                            + " quarter in the end-to-end benchmark, without a better latency.")
             .define(PRODUCER_COMPRESSION, Type.STRING, "none",
                     ValidString.in("none", "gzip", "snappy", "lz4", "zstd"), Importance.LOW,
                     "Compression of what the stream threads write: suggestion lists, store changelogs and"
@@ -204,6 +211,10 @@ public final class AppConfig extends AbstractConfig {
         return getInt(TOPIC_PARTITIONS);
     }
 
+    public int producerBatchBytes() {
+        return getInt(PRODUCER_BATCH_BYTES);
+    }
+
     public String producerCompression() {
         return getString(PRODUCER_COMPRESSION);
     }
@@ -224,6 +235,7 @@ public final class AppConfig extends AbstractConfig {
         p.put(StreamsConfig.consumerPrefix(ConsumerConfig.FETCH_MAX_WAIT_MS_CONFIG), 50);
         p.put(StreamsConfig.producerPrefix(ProducerConfig.LINGER_MS_CONFIG), producerLingerMs());
         p.put(StreamsConfig.producerPrefix(ProducerConfig.COMPRESSION_TYPE_CONFIG), producerCompression());
+        p.put(StreamsConfig.producerPrefix(ProducerConfig.BATCH_SIZE_CONFIG), producerBatchBytes());
         p.put(StreamsConfig.DESERIALIZATION_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringDeserializationHandler.class);
         p.put(StreamsConfig.PROCESSING_EXCEPTION_HANDLER_CLASS_CONFIG, DeadLetteringProcessingHandler.class);
         p.put(DeadLetteringDeserializationHandler.TOPIC_PREFIX_CONFIG, topicPrefix());

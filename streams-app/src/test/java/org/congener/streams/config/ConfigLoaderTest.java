@@ -92,6 +92,16 @@ class ConfigLoaderTest {
     }
 
     @Test
+    void shouldPassTheBatchSizeToTheStreamThreadsProducer() {
+        assertEquals(16_384, ConfigLoader.load(null, Map.of(), Map.of()).streamsProperties()
+                .get("producer.batch.size"));
+        assertEquals(262_144, ConfigLoader.load(null, Map.of("CONGENER_PRODUCER_BATCH_SIZE", "262144"), Map.of())
+                .streamsProperties().get("producer.batch.size"));
+        assertThrows(ConfigLoadException.class,
+                () -> ConfigLoader.load(null, Map.of(), Map.of(AppConfig.PRODUCER_BATCH_BYTES, "100")));
+    }
+
+    @Test
     void shouldListTheCodecsWhenCompressionIsUnknown() {
         ConfigLoadException e = assertThrows(ConfigLoadException.class,
                 () -> ConfigLoader.load(null, Map.of(), Map.of(AppConfig.PRODUCER_COMPRESSION, "brotli")));
