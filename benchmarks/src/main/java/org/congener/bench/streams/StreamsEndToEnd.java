@@ -59,7 +59,7 @@ import org.congener.streams.config.AppConfig;
 
 /**
  * Events through a real embedded broker and the real streams app under a published model version, in
- * two runs on the same broker and world (catalogue, researchers, model version):
+ * two or three runs on the same broker and world (catalogue, researchers, model version):
  * <ol>
  *   <li>the app as it ships: a warm-up burst (JIT, caches), then events paced at a given rate with the
  *       latency from event produced to its suggestion list read committed, then an unpaced burst whose
@@ -67,7 +67,9 @@ import org.congener.streams.config.AppConfig;
  *       researcher;</li>
  *   <li>the platform's ceiling: the same topology, topics, serdes, stores, guarantee and threads with a
  *       scorer that offers nothing, under the same unpaced burst, run three times; the best is the
- *       ceiling.</li>
+ *       ceiling;</li>
+ *   <li>with {@code -Dceiling.full.lists=true}, the same with a scorer that returns lists of the app's
+ *       size without computing them: what publishing and storing the lists costs on its own.</li>
  * </ol>
  * Then this machine's multiply-add rate, the multiply-adds the app's scoring does per event (counted
  * from the researchers' actual history sizes), and the ideal rate 1 / (1/ceiling + work/rate). Researchers
@@ -77,8 +79,9 @@ import org.congener.streams.config.AppConfig;
  * given as a system property of the same name (e.g. {@code -Dcommit.interval.ms=100}), and
  * {@code guarantee} for {@code processing.guarantee}, overrides the app's default for both runs;
  * {@code latency.series=FILE} writes the paced run's latencies in the order the events were produced.
- * Both runs print their commits' count and where a commit's time goes (producer flush, offsets,
- * transaction commit).
+ * Every run prints its commits' count and where a commit's time goes (producer flush, offsets,
+ * transaction commit), and each burst the CPU per event of every thread of the JVM.
+ * {@code broker.process=HEAP} runs the broker in a JVM of its own instead of this one.
  */
 public final class StreamsEndToEnd {
 
@@ -114,11 +117,10 @@ public final class StreamsEndToEnd {
         String brokerHeap = System.getProperty("broker.process");
         System.out.println(brokerHeap == null ? "broker: in this JVM"
                 : "broker: in a JVM of its own (heap " + brokerHeap + ")");
-        try (AutoCloseable broker = brokerHeap == null
-                ? EmbeddedKafkaBroker.builder().dataDir(dir.resolve("broker")).port(0).start()
-                : BrokerProcess.start(dir.resolve("broker"), brokerHeap)) {
-            String bootstrap = broker instanceof EmbeddedKafkaBroker b ? b.bootstrapServers()
-                    : ((BrokerProcess) broker).bootstrapServers();
+        try (EmbeddedKafkaBroker inThisJvm = brokerHeap == null
+                ? EmbeddedKafkaBroker.builder().dataDir(dir.resolve("broker")).port(0).start() : null;
+             BrokerProcess ofItsOwn = brokerHeap == null ? null : BrokerProcess.start(dir.resolve("broker"), brokerHeap)) {
+            String bootstrap = inThisJvm != null ? inThisJvm.bootstrapServers() : ofItsOwn.bootstrapServers();
             Workload workload = new Workload(researchers, compounds, 0);
             RunResult app = run(bootstrap, dir, "e2e.", null, workload, compounds, rank, rate, seconds, burst);
             RunResult ceiling = run(bootstrap, dir, "e2e-ceiling.", new OffersNothing(), workload, compounds, rank,
@@ -432,7 +434,6 @@ public final class StreamsEndToEnd {
         }
     }
 
-    /** A scorer that offers nothing: the pipeline's cost without the scoring work. */
     /**
      * Lists of the app's size and shape (n candidates, each with three contributors and scores printed
      * at full precision) taken from a fixed set of compounds without any arithmetic: the platform's
@@ -474,6 +475,7 @@ public final class StreamsEndToEnd {
         }
     }
 
+    /** A scorer that offers nothing: the pipeline's cost without the scoring work. */
     static final class OffersNothing implements SuggestionScorer {
         @Override
         public SuggestionSource source() {

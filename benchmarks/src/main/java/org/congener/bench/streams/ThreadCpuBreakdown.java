@@ -50,10 +50,8 @@ final class ThreadCpuBreakdown {
                 } catch (IOException gone) {
                     continue;
                 }
-                // "tid (comm) state ..." ; comm may hold spaces, so split after its closing parenthesis
                 String comm = stat.substring(stat.indexOf('(') + 1, stat.lastIndexOf(')'));
-                String[] f = stat.substring(stat.lastIndexOf(')') + 2).split(" ");
-                long nanos = (long) ((Long.parseLong(f[11]) + Long.parseLong(f[12])) * TICK_NANOS);
+                long nanos = cpuNanos(stat);
                 tasksTotal += nanos;
                 String g = jvmGroup(comm);
                 if (g != null) {
@@ -79,7 +77,12 @@ final class ThreadCpuBreakdown {
     }
 
     private static long processNanos() throws IOException {
-        String stat = Files.readString(Path.of("/proc/self/stat"));
+        return cpuNanos(Files.readString(Path.of("/proc/self/stat")));
+    }
+
+    /** User plus system time of a {@code stat} line, "pid (comm) state ...", in nanoseconds. */
+    private static long cpuNanos(String stat) {
+        // comm may hold spaces and parentheses: the fields start after the last ')'
         String[] f = stat.substring(stat.lastIndexOf(')') + 2).split(" ");
         return (long) ((Long.parseLong(f[11]) + Long.parseLong(f[12])) * TICK_NANOS);
     }
